@@ -1,0 +1,9 @@
+CREATE TRIGGER audit_event_no_update BEFORE UPDATE ON audit_event
+BEGIN
+  SELECT RAISE(ABORT, 'audit_event is append-only');
+END;
+--> statement-breakpoint
+CREATE TRIGGER audit_event_no_delete BEFORE DELETE ON audit_event
+BEGIN
+  SELECT RAISE(ABORT, 'audit_event is append-only');
+END;

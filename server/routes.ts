@@ -1,0 +1,8 @@
+// Every feature's API router, mounted under /api. A feature adds one line here.
+import type { Router } from 'express';
+import type { AppContext } from './context';
+import { auditRouter } from './audit/routes';
+import { devMailRouter } from './mail/routes';
+import { peopleRouter } from './people/routes';
+
+export const featureRouters: Array<(ctx: AppContext) => Router> = [peopleRouter, auditRouter, devMailRouter];
