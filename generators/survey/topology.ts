@@ -68,7 +68,7 @@ function classifyTree(edges: Edge[], hub: string, explicit: boolean): Layout {
   const allTouchHub = edges.every((e) => e.a === hub || e.b === hub);
   if (allTouchHub && (hubDegree >= 2 || explicit)) return 'star';
   const others = [...degree].filter(([id]) => id !== hub).map(([, d]) => d);
-  if (Math.max(hubDegree, ...others) <= 2) return 'bus';
+  if (hubDegree <= 2 && others.every((d) => d <= 2)) return 'bus';
   if (hubDegree >= 3 && others.every((d) => d <= 2)) return 'mixed';
   return 'tree';
 }
