@@ -1,0 +1,3 @@
+import { DevMailScreen } from '@/components/mail/dev-mail-screen';
+
+export default DevMailScreen;

@@ -1,0 +1,3 @@
+import { MoreScreen } from '@/components/shell/more-screen';
+
+export default MoreScreen;

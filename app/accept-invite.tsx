@@ -1,0 +1,3 @@
+import { AcceptInviteScreen } from '@/components/auth/accept-invite-screen';
+
+export default AcceptInviteScreen;

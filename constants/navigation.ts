@@ -1,0 +1,27 @@
+// What each role sees in the navigation. The server's role checks are the authority; this only hides
+// screens a role may not use. A feature adds its entry here.
+import type { Role } from '@/hooks/use-session';
+
+export type NavItem = { href: string; label: string; glyph: string; roles: Role[]; testID: string };
+
+export const NAV_ITEMS: NavItem[] = [
+  { href: '/', label: 'Home', glyph: '⌂', roles: ['admin', 'lead', 'technician', 'user'], testID: 'nav-home' },
+  { href: '/people', label: 'People', glyph: '☺', roles: ['admin'], testID: 'nav-people' },
+  { href: '/mail', label: 'Mail', glyph: '✉', roles: ['admin'], testID: 'nav-mail' },
+];
+
+export function navFor(role: Role): NavItem[] {
+  return NAV_ITEMS.filter((i) => i.roles.includes(role));
+}
+
+/** True when `pathname` belongs to nav item `href` (Home only matches "/"). */
+export function isActive(href: string, pathname: string): boolean {
+  return href === '/' ? pathname === '/' : pathname === href || pathname.startsWith(`${href}/`);
+}
+
+export const ROLE_LABELS: Record<Role, string> = {
+  admin: 'Admin',
+  lead: 'Lead',
+  technician: 'Technician',
+  user: 'Office user',
+};

@@ -1,0 +1,15 @@
+import { QueryClient } from '@tanstack/react-query';
+import { ApiError } from './api-client';
+
+/** The app's one QueryClient: no retries on 4xx answers, a short stale time. */
+export function makeQueryClient() {
+  return new QueryClient({
+    defaultOptions: {
+      queries: {
+        staleTime: 15_000,
+        retry: (count, err) => !(err instanceof ApiError && err.status >= 400 && err.status < 500) && count < 2,
+        refetchOnWindowFocus: false,
+      },
+    },
+  });
+}
