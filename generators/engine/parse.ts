@@ -1,0 +1,46 @@
+/**
+ * Bytes to lossless models and back. Parsing never throws: any byte sequence gives a model whose printout
+ * is the same bytes.
+ */
+import { decodeCp437, encodeCp437 } from '../dos/cp437';
+import { readBatchLine } from './batch-syntax';
+import { readConfigLine } from './config-syntax';
+import { joinLines, splitLines } from './lines';
+import type { BatchModel, ConfigLine, ConfigModel, TextModel } from './model';
+
+/** Reads AUTOEXEC.BAT (or any batch file) bytes into a model. */
+export function parseBatch(bytes: Uint8Array): BatchModel {
+  return parseBatchText(decodeCp437(bytes));
+}
+
+/** Same as parseBatch over already decoded text. */
+export function parseBatchText(source: string): BatchModel {
+  const { lines, tail } = splitLines(source);
+  return { kind: 'batch', source, tail, lines: lines.map((l) => ({ ...l, ...readBatchLine(l.text) })) };
+}
+
+/** Reads CONFIG.SYS bytes into a model; each line knows the `[block]` it sits in (null before the first). */
+export function parseConfig(bytes: Uint8Array): ConfigModel {
+  return parseConfigText(decodeCp437(bytes));
+}
+
+export function parseConfigText(source: string): ConfigModel {
+  const { lines, tail } = splitLines(source);
+  let section: string | null = null;
+  const out: ConfigLine[] = lines.map((l) => {
+    const syntax = readConfigLine(l.text);
+    if (syntax.stmt.kind === 'block') section = syntax.stmt.name;
+    return { ...l, ...syntax, section };
+  });
+  return { kind: 'config', source, tail, lines: out };
+}
+
+/** The model's text: lines with their own terminators, then the tail. */
+export function printText(model: TextModel): string {
+  return joinLines(model.lines, model.tail);
+}
+
+/** The model's bytes; for a parsed model these are the input bytes exactly. */
+export function printModel(model: TextModel): Uint8Array {
+  return encodeCp437(printText(model));
+}
