@@ -33,8 +33,8 @@ export function asEntered(value: number): string {
   return String(value);
 }
 
-/** Formats a computed sum of entered numbers: 12 significant digits hide floating-point noise
- * (0.1 + 0.2 prints as 0.3) without rounding away anything that was entered. */
+/** Formats a computed sum of entered numbers: 15 significant digits hide floating-point noise
+ * (0.1 + 0.2 prints as 0.3) and keep every digit a person could have entered. */
 export function asSum(value: number): string {
-  return String(Number.parseFloat(value.toPrecision(12)));
+  return String(Number.parseFloat(value.toPrecision(15)));
 }

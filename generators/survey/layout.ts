@@ -23,7 +23,9 @@ function childrenOf(forest: Forest): Map<string, string[]> {
     for (const id of component) {
       const step = forest.up.get(id);
       if (!step) continue;
-      children.set(step.parent, [...(children.get(step.parent) ?? []), id]);
+      const siblings = children.get(step.parent);
+      if (siblings) siblings.push(id);
+      else children.set(step.parent, [id]);
     }
   }
   return children;

@@ -91,24 +91,23 @@ export function classifyLayout(
 /** Each spoke of a star: the nodes behind one run from the hub, and the longest path into them. */
 export function starSpokes(graph: Graph, hub: string): Spoke[] {
   return graph.neighbours.get(hub)!.map(({ edge, other }) => {
-    const pathTo = new Map<string, Edge[]>([[other, [edge]]]);
+    // Parent links and distances, not copied paths: a spoke may hold a long chain of cords.
+    const via = new Map<string, { edge: Edge; parent: string | null }>([[other, { edge, parent: null }]]);
+    const distance = new Map<string, number>([[other, edge.lengthFt]]);
     const order = [other];
     for (let i = 0; i < order.length; i += 1) {
       const node = order[i];
       for (const next of graph.neighbours.get(node)!) {
-        if (next.other === hub || pathTo.has(next.other)) continue;
-        pathTo.set(next.other, [...pathTo.get(node)!, next.edge]);
+        if (next.other === hub || via.has(next.other)) continue;
+        via.set(next.other, { edge: next.edge, parent: node });
+        distance.set(next.other, distance.get(node)! + next.edge.lengthFt);
         order.push(next.other);
       }
     }
     let far = other;
-    for (const node of order) {
-      if (sumLength(pathTo.get(node)!) > sumLength(pathTo.get(far)!)) far = node;
-    }
-    return { firstRunId: edge.runId, nodeIds: order, farthest: summarisePath(hub, far, pathTo.get(far)!) };
+    for (const node of order) if (distance.get(node)! > distance.get(far)!) far = node;
+    const path: Edge[] = [];
+    for (let at: string | null = far; at !== null; at = via.get(at)!.parent) path.unshift(via.get(at)!.edge);
+    return { firstRunId: edge.runId, nodeIds: order, farthest: summarisePath(hub, far, path) };
   });
-}
-
-function sumLength(edges: Edge[]): number {
-  return edges.reduce((s, e) => s + e.lengthFt, 0);
 }
