@@ -1,5 +1,5 @@
 // Plan revisions and the review on them. An approval is pinned to the hashes it saw.
-import { blob, index, integer, sqliteTable, text } from 'drizzle-orm/sqlite-core';
+import { blob, index, integer, sqliteTable, text, uniqueIndex } from 'drizzle-orm/sqlite-core';
 import { user } from './auth-schema';
 import { station } from './sites';
 
@@ -37,6 +37,8 @@ export const planRevision = sqliteTable(
     /** Technician's written reason per warning slug+line key. */
     warningReasons: text('warning_reasons', { mode: 'json' }).$type<Record<string, string>>().notNull(),
     submittedAt: integer('submitted_at', { mode: 'timestamp_ms' }),
+    /** Who sent it for review: the plan's technician, told of the decision (a user's draft is made by the user). */
+    submittedBy: text('submitted_by').references(() => user.id),
     decidedBy: text('decided_by').references(() => user.id),
     decidedAt: integer('decided_at', { mode: 'timestamp_ms' }),
     decisionComment: text('decision_comment'),
@@ -45,7 +47,11 @@ export const planRevision = sqliteTable(
     releasedAt: integer('released_at', { mode: 'timestamp_ms' }),
     version: integer('version').notNull().default(1),
   },
-  (t) => [index('plan_station_idx').on(t.stationId), index('plan_state_idx').on(t.state)],
+  (t) => [
+    index('plan_station_idx').on(t.stationId),
+    index('plan_state_idx').on(t.state),
+    uniqueIndex('plan_station_revision_uq').on(t.stationId, t.revision),
+  ],
 );
 
 export const planComment = sqliteTable('plan_comment', {
