@@ -40,6 +40,14 @@ function drawingChecks(survey: CleanSurvey, topology: Topology): SurveyCheck[] {
   return checks;
 }
 
+/** Every check also names the jacks of the nodes it names, so a screen can mark them on the jack list. */
+function withJacks(checks: SurveyCheck[], survey: CleanSurvey): SurveyCheck[] {
+  return checks.map((c) => {
+    const fromNodes = c.nodeIds.map((id) => survey.nodeById.get(id)?.jackId).filter((j): j is string => j !== undefined);
+    return { ...c, jackIds: [...new Set([...c.jackIds, ...fromNodes])] };
+  });
+}
+
 function count(checks: SurveyCheck[]): Record<Severity, number> {
   const counts: Record<Severity, number> = { error: 0, warning: 0, note: 0 };
   for (const c of checks) counts[c.severity] += 1;
@@ -57,7 +65,7 @@ export function analyzeSurvey(input: SurveyInput): SurveyResult {
   const sum = totals(survey.runs);
   const pairs = analysePairs(survey);
   const polarity = analysePolarity(survey, forest);
-  const checks = sortChecks([
+  const checks = withJacks(sortChecks([
     ...inputChecks,
     ...graphChecks(survey, graph, forest, main),
     ...pairs.checks,
@@ -68,7 +76,7 @@ export function analyzeSurvey(input: SurveyInput): SurveyResult {
     ...polarity.checks,
     ...splitterChecks(survey, graph),
     ...drawingChecks(survey, topology),
-  ]);
+  ]), survey);
   return {
     layout: topology.layout,
     centreNodeId: topology.hubNodeId,

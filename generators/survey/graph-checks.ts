@@ -10,7 +10,9 @@ import type { SurveyCheck } from './types';
 /** The component the network is judged on: the centre's, else the largest (the first of equals). */
 export function mainComponent(forest: Forest, centreNodeId: string | null): number | null {
   if (forest.components.length === 0) return null;
-  if (centreNodeId !== null && forest.componentOf.has(centreNodeId)) return forest.componentOf.get(centreNodeId)!;
+  // The centre's part, unless the centre is not wired yet: then the wiring elsewhere is the network.
+  const centrePart = centreNodeId === null ? undefined : forest.componentOf.get(centreNodeId);
+  if (centrePart !== undefined && forest.components[centrePart].length > 1) return centrePart;
   let best = 0;
   forest.components.forEach((c, i) => {
     if (c.length > forest.components[best].length) best = i;

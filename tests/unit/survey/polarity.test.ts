@@ -116,3 +116,18 @@ describe('polarity parity on random trees (property; trade practice, no publishe
     }), { numRuns: 1000 });
   });
 });
+
+describe('polarity with very many adapters', () => {
+  it('judges more than 100 adapters in one part by parity groups and names the odd side', () => {
+    const s = withAdapters(chain([10]), []);
+    for (let i = 0; i < 101; i += 1) {
+      s.nodes.push(node(`a${i}`, 'adapter'));
+      s.runs.push(cord(`c${i}`, 'n1', `a${i}`, 7, i !== 42));
+    }
+    const result = analyzeSurvey(s);
+    expect(result.adapterPaths).toEqual([]);
+    const odd = result.checks.filter((c) => c.slug === 'polarity-odd');
+    expect(odd).toHaveLength(1);
+    expect(odd[0].nodeIds).toEqual(['a42']);
+  });
+});

@@ -126,3 +126,22 @@ describe('splitters go into a wall jack, never into an adapter (trade practice, 
     expect(analyzeSurvey(s).checks.find((x) => x.slug === 'splitter-not-at-wall-jack')!.nodeIds[0]).toBe('s2');
   });
 });
+
+describe('checks name the jacks of their nodes', () => {
+  it('adds the jack of every node a check names', () => {
+    const s = star([600, 100]);
+    s.jacks.push({ id: 'j1', label: 'J-01' }, { id: 'j2', label: 'J-02' });
+    s.nodes[1].jackId = 'j1';
+    s.nodes[2].jackId = 'j2';
+    expect(analyzeSurvey(s).checks.find((c) => c.slug === 'spoke-too-long')!.jackIds).toEqual(['j1']);
+  });
+
+  it('judges the wired part when the chosen centre is not wired yet', () => {
+    const s = chain([100, 100]);
+    s.nodes.push(node('hub', 'block'));
+    s.centreNodeId = 'hub';
+    const result = analyzeSurvey(s);
+    expect(result.layout).toBe('bus');
+    expect(result.checks.find((c) => c.slug === 'wiring-disconnected')!.nodeIds).toEqual(['hub']);
+  });
+});
