@@ -5,3 +5,4 @@ export * from './sites';
 export * from './plans';
 export * from './audit';
 export * from './bundles';
+export * from './survey';
