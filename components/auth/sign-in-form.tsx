@@ -9,9 +9,10 @@ import { TextField } from '@/components/ui/text-field';
 
 type Props = { onSubmit: (values: SignInInput) => Promise<void> | void; error?: string | null; busy?: boolean };
 
-/** E-mail and password, validated by the shared zod schema; errors show once a field was touched. */
+/** E-mail and password, validated by the shared zod schema; errors appear after a field
+ * loses focus or on submit (mode onTouched). */
 export function SignInForm({ onSubmit, error, busy }: Props) {
-  const { control, handleSubmit, formState } = useForm<SignInInput>({
+  const { control, handleSubmit } = useForm<SignInInput>({
     resolver: zodResolver(signInSchema),
     defaultValues: { email: '', password: '' },
     mode: 'onTouched',
@@ -38,7 +39,7 @@ export function SignInForm({ onSubmit, error, busy }: Props) {
             value={field.value}
             onChangeText={field.onChange}
             onBlur={field.onBlur}
-            error={fieldState.isTouched || formState.isSubmitted ? fieldState.error?.message : undefined}
+            error={fieldState.error?.message}
           />
         )}
       />
@@ -55,7 +56,7 @@ export function SignInForm({ onSubmit, error, busy }: Props) {
             onChangeText={field.onChange}
             onBlur={field.onBlur}
             onSubmitEditing={submit}
-            error={fieldState.isTouched || formState.isSubmitted ? fieldState.error?.message : undefined}
+            error={fieldState.error?.message}
           />
         )}
       />
