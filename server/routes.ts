@@ -4,5 +4,8 @@ import type { AppContext } from './context';
 import { auditRouter } from './audit/routes';
 import { devMailRouter } from './mail/routes';
 import { peopleRouter } from './people/routes';
+import { surveyRouter } from './survey/routes';
+import { sitesRouter, kitsRouter, stationsRouter, siteDirectoryRouter } from './sites/all-routes';
+import { planRouters } from './plans/routers';
 
-export const featureRouters: Array<(ctx: AppContext) => Router> = [peopleRouter, auditRouter, devMailRouter];
+export const featureRouters: Array<(ctx: AppContext) => Router> = [peopleRouter, auditRouter, devMailRouter, sitesRouter, siteDirectoryRouter, kitsRouter, stationsRouter, ...planRouters, surveyRouter];
