@@ -48,26 +48,36 @@ export function loadPlanInput(source: DbOrCtx, stationId: number): PlanInputBund
   if (!s) throw notFound('That site');
   const row = db.select().from(profile).where(eq(profile.stationId, stationId)).get() ?? null;
   const k = row?.kitId ? (db.select().from(kit).where(eq(kit.id, row.kitId)).get() ?? null) : null;
-  const merged = mergeProfile((row?.data ?? {}) as Record<string, unknown>, k);
-  const parsed = profileSchema.safeParse(merged);
+  const { profile: merged, profileError } = profileFrom((row?.data ?? {}) as Record<string, unknown>, k);
   const autoexec = currentFile(db, stationId, 'AUTOEXEC.BAT');
   const config = currentFile(db, stationId, 'CONFIG.SYS');
   return {
     station: st,
     site: s,
     profileRow: row,
-    profile: (parsed.success ? parsed.data : merged) as Profile,
-    profileError: parsed.success ? null : describeIssue(parsed.error.issues[0]),
+    profile: merged,
+    profileError,
     kit: k,
     autoexec,
     config,
     hashes: {
-      profile: sha256(canonicalJson(parsed.success ? parsed.data : merged)),
+      profile: sha256(canonicalJson(merged)),
       kit: k ? sha256(canonicalJson(kitFacts(k))) : null,
       autoexecIn: autoexec.bytes ? sha256(autoexec.bytes) : null,
       configIn: config.bytes ? sha256(config.bytes) : null,
     },
   };
+}
+
+/**
+ * The engine profile for stored (or unsaved) profile data and a kit: merged, then validated. When it does not
+ * pass the schema, `profile` is the merged data as it is and `profileError` names the first bad field.
+ */
+export function profileFrom(data: Record<string, unknown>, k: KitRow | null): { profile: Profile; profileError: string | null } {
+  const merged = mergeProfile(data, k);
+  const parsed = profileSchema.safeParse(merged);
+  if (parsed.success) return { profile: parsed.data, profileError: null };
+  return { profile: merged as Profile, profileError: describeIssue(parsed.error.issues[0]) };
 }
 
 /** The newest revision of one kind (revisions are never overwritten, so the highest id is current). */
