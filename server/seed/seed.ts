@@ -3,6 +3,7 @@ import { count } from 'drizzle-orm';
 import { createHash } from 'node:crypto';
 import { kit, profile, site, startupFile, station, user } from '@/db/schema';
 import type { AppContext } from '../context';
+import { seedDemoSurvey } from '../survey/seed';
 import { DEMO_FILES } from './demo-files';
 import { DEMO_ACCOUNTS, DEMO_KIT, DEMO_OTHER_STATIONS, DEMO_PASSWORD, DEMO_PCS, DEMO_RANGES, DEMO_SITE, demoProfile } from './demo-data';
 
@@ -67,5 +68,6 @@ export async function seedDemo(ctx: AppContext) {
       tx.insert(station).values({ siteId: s.id, ...o, createdAt: now, updatedAt: now }).run();
     }
   });
+  seedDemoSurvey(ctx);
   ctx.audit.record(null, { action: 'seed', entity: 'system', details: { accounts: DEMO_ACCOUNTS.length, pcs: DEMO_PCS.length } });
 }
