@@ -11,7 +11,7 @@ import { formatDosVersion, type DosFeatures } from './dos-version';
 import { stemOf } from './dos-path';
 import { buildFlow, reachable, type FlowGraph } from './flow';
 import { batchOffPrefix, BLOCK_END, BLOCK_START, findBlock, isBlockEnd, isBlockStart, type BlockSpan } from './markers';
-import type { BatchLine } from './model';
+import type { BatchLine, BatchModel } from './model';
 import { loaderCommand, modeCommand, redirectCommand, serialSetupCommand, useLoadHigh } from './commands';
 import { parseBatchText } from './parse';
 import { candidateIndexes, detectFinal, programOf, type Candidate } from './programs';
@@ -35,6 +35,8 @@ export type AutoexecOutcome = {
   insertedAt: number | null;
   finalProgram: FinalProgram | null;
   candidates: Candidate[];
+  /** The parsed input, when there was one. */
+  model: BatchModel | null;
 };
 
 /** Plans the edits to `source` (null or '' when the PC has no AUTOEXEC.BAT or an empty one). */
@@ -44,14 +46,23 @@ export function planAutoexec(source: string | null, ctx: AutoexecContext): Autoe
   const search = findBlock(model.lines.map((l) => l.text), isBlockStart, isBlockEnd);
   if (search.found === 'broken') {
     const check = lineCheck('block-broken', 'error', F, search.line + 1, `Our block cannot be rewritten safely: ${search.reason}. Fix the marker lines by hand.`);
-    return { changes: [], checks: [check], insertedAt: null, finalProgram: null, candidates: [] };
+    return { changes: [], checks: [check], insertedAt: null, finalProgram: null, candidates: [], model };
   }
   const span = search.found ? search.span : null;
   const view = span ? model.lines.filter((_, i) => i < span.start || i > span.end) : model.lines;
-  return planOnView(model.lines, view, span, source.length - model.tail.length, ctx);
+  return { ...planOnView(model.lines, view, span, source.length - model.tail.length, ctx), model };
 }
 
-type Analysis = { graph: FlowGraph; reach: boolean[]; final: number | null; finalChecks: Check[]; candidates: number[] };
+type Analysis = {
+  /** The final program ends the boot here. */
+  graph: FlowGraph;
+  /** The final program returns (what a GOTO menu loop does). */
+  open: FlowGraph;
+  reach: boolean[];
+  final: number | null;
+  finalChecks: Check[];
+  candidates: number[];
+};
 
 function analyse(view: readonly BatchLine[], ctx: AutoexecContext): Analysis {
   const loaderStem = stemOf(ctx.profile.loader.path);
@@ -59,7 +70,7 @@ function analyse(view: readonly BatchLine[], ctx: AutoexecContext): Analysis {
   const candidates = candidateIndexes(view, reachable(open), loaderStem);
   const { final, checks } = chooseFinal(view, candidates, ctx.profile.finalProgram);
   const graph = buildFlow(view, { finalIndex: final, configChoices: ctx.configChoices });
-  return { graph, reach: reachable(graph), final, finalChecks: checks, candidates };
+  return { graph, open, reach: reachable(graph), final, finalChecks: checks, candidates };
 }
 
 function chooseFinal(view: readonly BatchLine[], candidates: number[], wanted: Profile['finalProgram']): { final: number | null; checks: Check[] } {
@@ -87,13 +98,13 @@ function choosePosition(view: readonly BatchLine[], valid: boolean[], kept: numb
   return p;
 }
 
-function planOnView(all: readonly BatchLine[], view: readonly BatchLine[], span: BlockSpan | null, bodyEnd: number, ctx: AutoexecContext): AutoexecOutcome {
+function planOnView(all: readonly BatchLine[], view: readonly BatchLine[], span: BlockSpan | null, bodyEnd: number, ctx: AutoexecContext): Omit<AutoexecOutcome, 'model'> {
   const a = analyse(view, ctx);
-  const valid = validCuts(a.graph);
+  const valid = validCuts(a.graph, a.open);
   const kept = span ? span.start : null;
   const p = choosePosition(view, valid, kept);
   const checks: Check[] = [...a.finalChecks];
-  const { lines: block, notes } = blockLines(view, a.graph, p, ctx);
+  const { lines: block, notes } = blockLines(view, a.open, p, ctx);
   checks.push(...notes);
   const insertedAt = p === kept ? span!.start + 1 : p < view.length ? view[p].index + 1 : all.length + 1;
   for (const line of block) {
@@ -175,14 +186,13 @@ function blockChanges(
     checks.push(lineCheck('block-moved', 'note', F, span.start + 1, 'Our block was where not every boot path passes it exactly once; it is moved.'));
     out.push({ edit: { offset: start, length, text: '' }, kind: 'replace-block', lines: [], reason: 'Our old block is removed here; it moves to where every boot path passes once.' });
   }
-  let offset = p < view.length ? view[p].offset : bodyEnd;
+  const offset = p < view.length ? view[p].offset : bodyEnd;
   let lead = '';
   const last = all[all.length - 1];
   if (p >= view.length && last && last.eol === '' && last.offset + last.text.length === bodyEnd && !(span && span.end === all.length - 1)) {
     lead = '\r\n';
     checks.push(lineCheck('line-end-added', 'note', F, last.index + 1, `The last line had no line end; CR LF is added so our block can follow it.`));
   }
-  if (p < view.length) offset = view[p].offset;
   out.push({ edit: { offset, length: 0, text: lead + text }, kind: 'insert-block', lines: block, reason });
   return out;
 }
@@ -206,5 +216,6 @@ function createAutoexec(source: string | null, ctx: AutoexecContext): AutoexecOu
     insertedAt: 1,
     finalProgram: null,
     candidates: [],
+    model: null,
   };
 }

@@ -4,7 +4,7 @@
  * that can come just before it.
  */
 import { innermost, isConditional, type Statement } from './batch-syntax';
-import { successors, type FlowGraph } from './flow';
+import { reachable, successors, type FlowGraph } from './flow';
 import { normaliseFolder } from './dos-path';
 import type { BatchLine } from './model';
 
@@ -16,8 +16,10 @@ export function mustHold(
   atStart: boolean,
 ): boolean[] {
   const count = g.n + 1;
+  // Only lines a path reaches count as predecessors: a line after the final program must not spoil a fact.
+  const reach = reachable(g);
   const preds: number[][] = Array.from({ length: count }, () => []);
-  for (let i = 0; i < g.n; i++) for (const j of successors(g, i)) preds[j].push(i);
+  for (let i = 0; i < g.n; i++) if (reach[i]) for (const j of successors(g, i)) preds[j].push(i);
   const out = new Array<boolean>(count).fill(true);
   // A line no path reaches gets "false": nothing is promised there.
   const inState = (i: number): boolean => {

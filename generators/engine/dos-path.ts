@@ -16,8 +16,8 @@ export function splitDosPath(path: string): DosPath {
 
 /** The last part (file name) of a path, upper-cased, e.g. "TLRES.COM". */
 export function baseName(path: string): string {
-  const parts = splitDosPath(path).parts;
-  return (parts[parts.length - 1] ?? '').toUpperCase();
+  const cut = Math.max(path.lastIndexOf('\\'), /^[A-Za-z]:/.test(path) ? 1 : -1);
+  return path.slice(cut + 1).toUpperCase();
 }
 
 /** The extension of the last part without the dot, upper-cased ("" when none). */
@@ -36,8 +36,21 @@ export function stemOf(path: string): string {
 
 export type PathProblem = { part: string; problem: NameProblem; reason: string };
 
+// Startup files name the same few programs again and again; remembering answers keeps planning fast.
+const memo = new Map<string, PathProblem[]>();
+
 /** Parts of a path that break the 8.3 rules or are device names; parts holding %VAR% are skipped. */
 export function pathProblems(path: string): PathProblem[] {
+  let found = memo.get(path);
+  if (found === undefined) {
+    if (memo.size > 2000) memo.clear();
+    found = computeProblems(path);
+    memo.set(path, found);
+  }
+  return found;
+}
+
+function computeProblems(path: string): PathProblem[] {
   const out: PathProblem[] = [];
   for (const part of splitDosPath(path).parts) {
     if (part.includes('%') || part === '.' || part === '..') continue;

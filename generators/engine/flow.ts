@@ -18,6 +18,8 @@ export type FlowGraph = {
   ends: boolean[];
   /** GOTO lines whose label is not in the file, with the missing name. */
   missingLabels: { line: number; label: string }[];
+  /** Successors of each node 0..n (jumps, then the next line when it falls through). */
+  succ: number[][];
 };
 
 export type FlowOptions = {
@@ -33,14 +35,16 @@ export function buildFlow(lines: readonly BatchLine[], options: FlowOptions): Fl
   lines.forEach((l, i) => {
     if (l.stmt.kind === 'label' && !labels.has(labelKey(l.stmt.name))) labels.set(labelKey(l.stmt.name), i);
   });
-  const g: FlowGraph = { n: lines.length, falls: [], jumps: [], ends: [], missingLabels: [] };
+  const g: FlowGraph = { n: lines.length, falls: [], jumps: [], ends: [], missingLabels: [], succ: [] };
   lines.forEach((line, i) => {
     const e = effectOf(line.stmt, i === options.finalIndex, labels, options.configChoices);
     g.falls.push(e.falls);
     g.jumps.push(e.jumps);
     g.ends.push(e.ends);
+    g.succ.push(e.falls ? [...e.jumps, i + 1] : e.jumps);
     for (const label of e.missing) g.missingLabels.push({ line: i, label });
   });
+  g.succ.push([]);
   return g;
 }
 
@@ -63,8 +67,11 @@ function effectOf(stmt: Statement, isFinal: boolean, labels: Map<string, number>
   }
 }
 
+const NONE: number[] = [];
+const PLAIN: Effect = { falls: true, jumps: NONE, ends: false, missing: [] };
+
 function plain(): Effect {
-  return { falls: true, jumps: [], ends: false, missing: [] };
+  return PLAIN;
 }
 
 function gotoEffect(stmt: Extract<Statement, { kind: 'goto' }>, labels: Map<string, number>, choices: string[] | null): Effect {
@@ -89,8 +96,7 @@ function gotoEffect(stmt: Extract<Statement, { kind: 'goto' }>, labels: Map<stri
 
 /** Successors of node i in 0..n (n = end of file); ends are not listed. */
 export function successors(g: FlowGraph, i: number): number[] {
-  if (i >= g.n) return [];
-  return g.falls[i] ? [...g.jumps[i], i + 1] : g.jumps[i];
+  return g.succ[i];
 }
 
 /** Nodes (0..n) reachable from the first line. */

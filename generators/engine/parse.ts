@@ -6,7 +6,7 @@ import { decodeCp437, encodeCp437 } from '../dos/cp437';
 import { readBatchLine } from './batch-syntax';
 import { readConfigLine } from './config-syntax';
 import { joinLines, splitLines } from './lines';
-import type { BatchModel, ConfigLine, ConfigModel, TextModel } from './model';
+import type { BatchLine, BatchModel, ConfigLine, ConfigModel, TextModel } from './model';
 
 /** Reads AUTOEXEC.BAT (or any batch file) bytes into a model. */
 export function parseBatch(bytes: Uint8Array): BatchModel {
@@ -16,7 +16,14 @@ export function parseBatch(bytes: Uint8Array): BatchModel {
 /** Same as parseBatch over already decoded text. */
 export function parseBatchText(source: string): BatchModel {
   const { lines, tail } = splitLines(source);
-  return { kind: 'batch', source, tail, lines: lines.map((l) => ({ ...l, ...readBatchLine(l.text) })) };
+  const out: BatchLine[] = new Array(lines.length);
+  for (let i = 0; i < lines.length; i++) {
+    const l = lines[i];
+    const syntax = readBatchLine(l.text);
+    // Built field by field: object spread here was the slowest step of a plan.
+    out[i] = { index: l.index, offset: l.offset, text: l.text, eol: l.eol, prefix: syntax.prefix, atSign: syntax.atSign, stmt: syntax.stmt };
+  }
+  return { kind: 'batch', source, tail, lines: out };
 }
 
 /** Reads CONFIG.SYS bytes into a model; each line knows the `[block]` it sits in (null before the first). */
@@ -30,7 +37,7 @@ export function parseConfigText(source: string): ConfigModel {
   const out: ConfigLine[] = lines.map((l) => {
     const syntax = readConfigLine(l.text);
     if (syntax.stmt.kind === 'block') section = syntax.stmt.name;
-    return { ...l, ...syntax, section };
+    return { index: l.index, offset: l.offset, text: l.text, eol: l.eol, stmt: syntax.stmt, section };
   });
   return { kind: 'config', source, tail, lines: out };
 }

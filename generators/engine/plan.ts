@@ -72,9 +72,9 @@ function changesOf(file: StartupFileName, source: string | null, pending: Pendin
     .sort((a, b) => a.line - b.line);
 }
 
-function bootOf(text: string | null): BootStep[] {
+function bootOf(text: string | null, parsed: BatchModel | null = null): BootStep[] {
   if (text === null) return [];
-  const model: BatchModel = parseBatchText(text);
+  const model: BatchModel = parsed ?? parseBatchText(text);
   const reach = reachable(buildFlow(model.lines, { finalIndex: null, configChoices: null }));
   return bootSteps(model.lines, reach, (i) => i + 1);
 }
@@ -100,7 +100,7 @@ function assemble(
     diff: autoFile.diff + (confFile?.diff ?? ''),
     changes,
     checks,
-    boot: { before: bootOf(autoText), after: bootOf(autoFile.afterText) },
+    boot: { before: bootOf(autoText, auto.model), after: bootOf(autoFile.afterText) },
     sha256: {
       input: autoIn ?? sha256Hex(new Uint8Array(0)),
       output: autoOut,
