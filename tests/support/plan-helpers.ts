@@ -60,7 +60,7 @@ export function replaceAutoexec(t: TestApp, stationId: number, text: string, by:
 }
 
 export function currentAutoexec(t: TestApp, stationId: number): string {
-  const rows = t.ctx.db.select().from(startupFile).where(eq(startupFile.stationId, stationId)).all();
+  const rows = t.ctx.db.select().from(startupFile).where(eq(startupFile.stationId, stationId)).orderBy(startupFile.id).all();
   return rows.filter((r) => r.kind === 'AUTOEXEC.BAT').at(-1)!.content.toString('latin1');
 }
 
