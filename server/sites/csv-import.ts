@@ -102,10 +102,13 @@ function checkRow(raw: Record<string, string>, line: number, ranges: NumberRange
   return { line, values: { name, number, kind: kind ?? 'other', location: cell('location'), notes: cell('notes'), dos, networkPort }, errors };
 }
 
-/** Rows without a number get the next free one of their kind's range, in file order. */
+/**
+ * Rows without a number get the next free one of their kind's range, in file order. A row with errors gets
+ * none, so fixing it later does not shift the numbers the other rows were shown.
+ */
 function assignNumbers(rows: ImportRow[], ranges: NumberRanges, numbers: Map<number, string>) {
   for (const row of rows) {
-    if (row.values.number !== null || row.errors.kind) continue;
+    if (row.values.number !== null || Object.keys(row.errors).length > 0) continue;
     const [first, last] = ranges[row.values.kind];
     let n = first;
     while (n <= last && numbers.has(n)) n++;

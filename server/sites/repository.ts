@@ -6,7 +6,9 @@ import type { Db } from '../db';
 export type SiteRow = typeof site.$inferSelect;
 export type SiteListFilter = { sort: 'name' | 'createdAt' | 'updatedAt' | 'stations'; dir: 'asc' | 'desc'; q?: string; archived: boolean; limit: number; offset: number };
 
-const stationCount = sql<number>`(select count(*) from ${station} where ${station.siteId} = ${site.id} and ${station.archivedAt} is null)`;
+// Written out with table names: inside a subquery Drizzle prints bare column names, and a bare "id" would
+// mean the station's id.
+const stationCount = sql<number>`(select count(*) from "station" where "station"."site_id" = "site"."id" and "station"."archived_at" is null)`;
 
 export function createSiteRepository(db: Db) {
   function where(f: Pick<SiteListFilter, 'q' | 'archived'>): SQL | undefined {
