@@ -76,16 +76,23 @@ export function readStubLog(root: string): StubEntry[] {
     });
 }
 
-function conf(runs: DosboxRun[]): string {
+// The [autoexec] section holds only a few hundred lines (observed: 60 runs of 8 lines ran nothing), so the
+// runs go into a driver batch file on drive D:, which mounts and unmounts C: for each run. The unmount is
+// given from Z: (from D: it failed when PATH pointed at C:, and every later run then used the first folder).
+function conf(driverDir: string): string {
   const lines = ['[dosbox]', 'memsize=4', '[mixer]', 'nosound=true', '[speaker]', 'pcspeaker=false', 'tandy=off',
     '[sblaster]', 'sbtype=none', '[gus]', 'gus=false', '[midi]', 'mpu401=none', '[joystick]', 'joysticktype=none',
-    '[serial]', 'serial1=disabled', 'serial2=disabled', '[autoexec]'];
+    '[serial]', 'serial1=disabled', 'serial2=disabled', '[autoexec]', `mount d ${driverDir}`, 'd:', 'call d:\\driver.bat', 'exit'];
+  return `${lines.join('\n')}\n`;
+}
+
+function driver(runs: DosboxRun[]): string {
+  const lines: string[] = [];
   for (const run of runs) {
     if (/\s/.test(run.root)) throw new Error(`DOSBox folder must not contain blanks: ${run.root}`);
     lines.push(`mount c ${run.root}`, 'c:', 'cd \\', ...run.commands, 'z:', 'mount -u c');
   }
-  lines.push('exit');
-  return `${lines.join('\n')}\n`;
+  return `${lines.join('\r\n')}\r\n`;
 }
 
 /** Runs every run in one DOSBox start, bounded by `timeoutMs`, and returns each run's stub log. */
@@ -94,7 +101,10 @@ export function runDosbox(runs: DosboxRun[], timeoutMs = 60_000): DosboxResult {
   requireTool('timeout', 'coreutils');
   const dir = mkdtempSync(join(tmpdir(), 'bw-dosbox-'));
   const confFile = join(dir, 'run.conf');
-  writeFileSync(confFile, conf(runs));
+  const driverDir = join(dir, 'd');
+  mkdirSync(driverDir);
+  writeFileSync(join(driverDir, 'DRIVER.BAT'), driver(runs));
+  writeFileSync(confFile, conf(driverDir));
   const started = Date.now();
   const res = spawnSync('timeout', [String(Math.ceil(timeoutMs / 1000)), 'dosbox', '-conf', confFile, '-exit'], {
     env: { ...process.env, SDL_VIDEODRIVER: 'dummy', SDL_AUDIODRIVER: 'dummy', HOME: dir },
