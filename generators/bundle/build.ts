@@ -5,6 +5,7 @@
  * and a large site never sits whole in memory. MANIFEST.CSV comes last: it lists the SHA-256 of every
  * file made before it.
  */
+import { PassThrough } from 'node:stream';
 import JSZip from 'jszip';
 import { bundleEntries, placePcs, SITE_FILES } from './layout';
 import type { PlacedPc } from './layout';
@@ -129,13 +130,18 @@ export function buildBundle(site: BundleSite, opts: BundleBuildOptions = {}): No
     }
   }
   if (placed.length === 0) opts.onProgress?.(0, 0);
-  return zip.generateNodeStream({
+  const zipped = zip.generateNodeStream({
     type: 'nodebuffer',
     streamFiles: true,
     compression: 'DEFLATE',
     compressionOptions: { level: BUNDLE_DEFLATE_LEVEL },
     platform: 'DOS',
   });
+  // JSZip's stream is the old readable-stream 2; hand out a current one (async iteration, pipeline()).
+  const out = new PassThrough();
+  zipped.on('error', (error: Error) => out.destroy(error));
+  zipped.pipe(out);
+  return out;
 }
 
 function rowOf(rows: Map<string, ManifestRow>, name: string): ManifestRow {
