@@ -9,7 +9,7 @@ import { join } from 'node:path';
 import JSZip from 'jszip';
 import { buildBundle } from '@/generators/bundle';
 import type { BundleBuildOptions, BundleSite } from '@/generators/bundle';
-import { requireTool } from './dosbox';
+import { requireProgram } from './bundle-dosbox';
 
 /** The whole bundle as one buffer (small sites only). */
 export async function bundleBuffer(site: BundleSite, opts?: BundleBuildOptions): Promise<Buffer> {
@@ -37,14 +37,14 @@ export function tempDir(prefix: string): string {
 
 /** Info-ZIP's verdict on a zip file: `unzip -t` output and exit status (0 = no errors). */
 export function unzipTest(file: string): { status: number | null; output: string } {
-  requireTool('unzip', 'unzip');
+  requireProgram('unzip', 'unzip');
   const res = spawnSync('unzip', ['-t', file], { encoding: 'utf8', maxBuffer: 64 * 1024 * 1024 });
   return { status: res.status, output: `${res.stdout}${res.stderr}` };
 }
 
 /** Entry names as Info-ZIP lists them (`unzip -Z1`), in archive order. */
 export function unzipNames(file: string): string[] {
-  requireTool('unzip', 'unzip');
+  requireProgram('unzip', 'unzip');
   const res = spawnSync('unzip', ['-Z1', file], { encoding: 'utf8', maxBuffer: 64 * 1024 * 1024 });
   if (res.status !== 0) throw new Error(`unzip -Z1 failed: ${res.stderr}`);
   return res.stdout.split('\n').filter((l) => l !== '');
@@ -52,7 +52,7 @@ export function unzipNames(file: string): string[] {
 
 /** Extracts with Info-ZIP into `dir`. */
 export function unzipInto(file: string, dir: string): void {
-  requireTool('unzip', 'unzip');
+  requireProgram('unzip', 'unzip');
   const res = spawnSync('unzip', ['-q', '-o', file, '-d', dir], { encoding: 'utf8' });
   if (res.status !== 0) throw new Error(`unzip failed: ${res.stderr}`);
 }

@@ -7,14 +7,14 @@ import { execFileSync } from 'node:child_process';
 import { readFileSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { SAMEFILE_COM } from '@/generators/bundle';
-import { requireTool, runDosbox } from '@/tests/support/dosbox';
+import { requireProgram, runDosboxLines } from '@/tests/support/bundle-dosbox';
 import { tempDir } from '@/tests/support/bundle-zip';
 
 const ASM = join(__dirname, '..', '..', '..', 'generators', 'bundle', 'samefile.asm');
 
 describe('SAMEFILE.COM', () => {
   it('is byte for byte what nasm assembles from samefile.asm', () => {
-    requireTool('nasm', 'nasm');
+    requireProgram('nasm', 'nasm');
     const out = join(tempDir('bw-samefile-'), 'SAMEFILE.COM');
     execFileSync('nasm', ['-f', 'bin', '-o', out, ASM]);
     expect(Buffer.from(SAMEFILE_COM).equals(readFileSync(out))).toBe(true);
@@ -73,8 +73,7 @@ describe('SAMEFILE.COM', () => {
       `:${id}END`,
     ]);
     writeFileSync(join(root, 'T.BAT'), `${batch.join('\r\n')}\r\n`, 'latin1');
-    const commands = ['CALL T.BAT'];
-    const result = runDosbox([{ name: 'samefile', root, commands }], 30_000);
+    const result = runDosboxLines([`mount c ${root}`, 'c:', 'CALL T.BAT'], 30_000);
     expect(result.timedOut).toBe(false);
     const seen = cases.map(([id, args]) => [id, args, Number(readFileSync(join(root, `${id}.TXT`), 'latin1').trim())]);
     expect(seen).toEqual(cases);
