@@ -8,6 +8,10 @@ export const NAV_ITEMS: NavItem[] = [
   { href: '/', label: 'Home', glyph: '⌂', roles: ['admin', 'lead', 'technician', 'user'], testID: 'nav-home' },
   { href: '/people', label: 'People', glyph: '☺', roles: ['admin'], testID: 'nav-people' },
   { href: '/mail', label: 'Mail', glyph: '✉', roles: ['admin'], testID: 'nav-mail' },
+  { href: '/plans', label: 'Plans', glyph: '▤', roles: ['technician', 'admin'], testID: 'nav-plans' },
+  { href: '/review', label: 'Review', glyph: '✓', roles: ['lead'], testID: 'nav-review' },
+  { href: '/my-station', label: 'My PC', glyph: '▣', roles: ['user'], testID: 'nav-my-station' },
+  { href: '/audit', label: 'Audit', glyph: '☰', roles: ['admin'], testID: 'nav-audit' },
 ];
 
 export function navFor(role: Role): NavItem[] {

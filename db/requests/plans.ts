@@ -89,9 +89,32 @@ export const userEditSchema = z.object({
 });
 export type UserEditInput = z.infer<typeof userEditSchema>;
 
-/** The form's shape: two text areas (the upload fills them). */
-export const userEditFormSchema = z.object({
-  autoexec: z.string().refine((s) => s.trim().length > 0, 'Paste or upload your AUTOEXEC.BAT.').pipe(z.string().max(USER_FILE_MAX_BYTES, 'That is too long for a startup file (64 KB at most).')),
-  config: z.string().max(USER_FILE_MAX_BYTES, 'That is too long for a startup file (64 KB at most).'),
-});
+/** An uploaded file as the form keeps it: its name, size and bytes in base64. */
+export const uploadSchema = z.object({ name: z.string().max(255), size: z.number().int().min(0).max(USER_FILE_MAX_BYTES, 'That file is too large for a startup file (64 KB at most).'), data: z.string() });
+export type Upload = z.infer<typeof uploadSchema>;
+
+const formText = z.string().max(USER_FILE_MAX_BYTES, 'That is too long for a startup file (64 KB at most).');
+
+/** The checked-edit form: each file is pasted text or an upload (an upload wins). */
+export const userEditFormSchema = z
+  .object({ autoexec: formText, config: formText, autoexecUpload: uploadSchema.nullable(), configUpload: uploadSchema.nullable() })
+  .refine((v) => v.autoexecUpload != null || v.autoexec.trim().length > 0, { path: ['autoexec'], message: 'Paste or upload your AUTOEXEC.BAT.' });
 export type UserEditForm = z.infer<typeof userEditFormSchema>;
+
+/** The request the form's values make. */
+export function userEditRequest(v: UserEditForm): UserEditInput {
+  const file = (text: string, upload: Upload | null): UserFile | null =>
+    upload ? { encoding: 'base64', data: upload.data } : text.trim() ? { encoding: 'text', data: text } : null;
+  return { autoexec: file(v.autoexec, v.autoexecUpload)!, config: file(v.config, v.configUpload) };
+}
+
+/** The technician's reasons, one per warning in the plan's order (keys hold dots, so not field names). */
+export const reasonsFormSchema = z.object({ reasons: z.array(reason) });
+export type ReasonsForm = z.infer<typeof reasonsFormSchema>;
+
+/** The lead's decision comment: optional to approve, required to return (returnPlanSchema). */
+export const decisionFormSchema = z.object({ comment: z.string().trim().max(COMMENT_MAX, `Keep it under ${COMMENT_MAX} characters.`) });
+export type DecisionForm = z.infer<typeof decisionFormSchema>;
+
+export const commentFormSchema = z.object({ body: commentSchema.shape.body });
+export type CommentForm = z.infer<typeof commentFormSchema>;

@@ -1,0 +1,3 @@
+import { AuditScreen } from '@/components/audit/audit-screen';
+
+export default AuditScreen;

@@ -1,0 +1,3 @@
+import { ReviewScreen } from '@/components/review/review-screen';
+
+export default ReviewScreen;

@@ -1,0 +1,3 @@
+import { ReviewQueueScreen } from '@/components/review/review-queue-screen';
+
+export default ReviewQueueScreen;

@@ -1,0 +1,5 @@
+import { RoleGate } from '@/components/shell/role-gate';
+
+export default function UserLayout() {
+  return <RoleGate roles={['user']} />;
+}

@@ -1,0 +1,3 @@
+import { MyStationScreen } from '@/components/my-station/my-station-screen';
+
+export default MyStationScreen;

@@ -1,0 +1,3 @@
+import { PlanScreen } from '@/components/plans/plan-screen';
+
+export default PlanScreen;

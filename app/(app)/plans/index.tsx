@@ -1,0 +1,3 @@
+import { PlansBoardScreen } from '@/components/plans/plans-board-screen';
+
+export default PlansBoardScreen;
