@@ -20,7 +20,8 @@ type ModeTarget =
 
 /** What a MODE command line does, from its arguments (REFERENCES 1.1, 1.2, 1.23, 1.25, 1.29). */
 export function modeTarget(args: string): ModeTarget {
-  const a = args.trim().toUpperCase();
+  // Output redirection (`> NUL`) and pipes are not MODE's arguments.
+  const a = args.replace(/[<>|].*$/, '').trim().toUpperCase();
   const redirect = /^(LPT\d):?[ \t]*=[ \t]*(COM\d):?[ \t]*$/.exec(a);
   if (redirect) return { kind: 'redirect', lpt: redirect[1], com: redirect[2] };
   const cancel = /^(LPT\d):?[ \t]*$/.exec(a);

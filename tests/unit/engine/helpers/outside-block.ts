@@ -59,12 +59,15 @@ export function outsideBlockProblems(before: string, after: string, checks: Chec
     const no = origNumber.get(o)!;
     const hasCheck = (slug?: string) => checks.some((c) => c.file === 'AUTOEXEC.BAT' && c.line === no && (!slug || c.slug === slug));
     if (n.text === o.text && n.eol === o.eol) return;
-    if (n.text === o.text && o.eol === '' && n.eol === '\r\n') {
-      if (!hasCheck('line-end-added')) problems.push(`line ${no} gained a line end without a check`);
+    const gainedEnd = o.eol === '' && n.eol === '\r\n';
+    if (n.eol !== o.eol && !gainedEnd) {
+      problems.push(`line ${no} changed its line end`);
       return;
     }
+    if (gainedEnd && !hasCheck('line-end-added')) problems.push(`line ${no} gained a line end without a check`);
+    if (n.text === o.text) return;
     const m = OFF.exec(n.text);
-    if (m && n.text.slice(m[0].length) === o.text && n.eol === o.eol) {
+    if (m && n.text.slice(m[0].length) === o.text) {
       if (!hasCheck()) problems.push(`line ${no} was turned off without a check`);
       return;
     }

@@ -33,6 +33,9 @@ export function batchLines(text: string): string[] {
 export function parseCmd(raw: string): Cmd {
   const s = raw.replace(/^[ \t]*@?[ \t]*/, '');
   if (s.trim() === '') return { t: 'nop' };
+  // `::` lines are labels no GOTO can name (GOTO drops one leading colon of its target), used as comments
+  // (REFERENCES 2.5); they are no jump targets here, not even for GOTO %CONFIG% with an unknown menu.
+  if (s.startsWith('::')) return { t: 'nop' };
   if (s.startsWith(':')) return { t: 'label', name: s.slice(1).trim().split(/\s/)[0].toUpperCase() };
   if (/^rem(\s|$)/i.test(s) || /^[;*#]/.test(s) || /^[a-z]:\s*$/i.test(s)) return { t: 'nop' };
   let m = /^goto[\s,;=]*:?(\S*)/i.exec(s);
