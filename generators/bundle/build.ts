@@ -1,12 +1,13 @@
 /**
  * Builds a site's rollout bundle as a zip stream (JSZip `generateNodeStream`, `streamFiles`, DEFLATE at a
- * fixed level). Entries are declared up front in a fixed order with the record's fixed time; their bytes
+ * fixed level, compressed by one reused pako state: deflate.ts). Entries are declared up front in a fixed order with the record's fixed time; their bytes
  * are made lazily, one PC folder at a time, so the same input always gives the same zip, byte for byte,
  * and a large site never sits whole in memory. MANIFEST.CSV comes last: it lists the SHA-256 of every
  * file made before it.
  */
-import { PassThrough } from 'node:stream';
 import JSZip from 'jszip';
+import { Coalesce } from './coalesce';
+import { SHARED_DEFLATE } from './jszip-deflate';
 import { bundleEntries, placePcs, SITE_FILES } from './layout';
 import type { PlacedPc } from './layout';
 import { LazySource } from './lazy-source';
@@ -133,12 +134,12 @@ export function buildBundle(site: BundleSite, opts: BundleBuildOptions = {}): No
   const zipped = zip.generateNodeStream({
     type: 'nodebuffer',
     streamFiles: true,
-    compression: 'DEFLATE',
+    // DEFLATE (method 8) through our shared pako state, see deflate.ts; JSZip's types list only its own names.
+    compression: SHARED_DEFLATE as 'DEFLATE',
     compressionOptions: { level: BUNDLE_DEFLATE_LEVEL },
     platform: 'DOS',
   });
-  // JSZip's stream is the old readable-stream 2; hand out a current one (async iteration, pipeline()).
-  const out = new PassThrough();
+  const out = new Coalesce();
   zipped.on('error', (error: Error) => out.destroy(error));
   zipped.pipe(out);
   return out;

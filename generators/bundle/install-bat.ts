@@ -2,8 +2,8 @@
  * INSTALL.BAT of one PC. Order of work, each step stopping with a message and no change when it fails:
  * run from the station's bundle folder; the technician confirms the station number (`INSTALL 12`);
  * SAMEFILE.COM answers both ways; the PC's startup files are still the plan's originals; a new backup
- * folder C:\BWSAVE\nnn is written and verified (never an existing one); the new files are copied and
- * verified. Only DOS 2.0 commands and our SAMEFILE.COM are used (see dialect.ts).
+ * folder C:\BWSAVE\nnn is written and verified (never an existing one, see slotChoice); the new files are
+ * copied and verified. Only DOS 2.0 commands and our SAMEFILE.COM are used (see dialect.ts).
  */
 import { BACKUP_ROOT, BACKUP_SLOTS, echo, pcFacts, rem, samefile, slotName, SLOT_RECORD } from './batch';
 import type { PcFacts } from './batch';
@@ -64,16 +64,22 @@ function originalsCheck(facts: PcFacts): string[] {
   return lines;
 }
 
-/** Picks the first backup folder that does not exist yet; an existing one is never written to. */
-function slotChoice(facts: PcFacts): string[] {
+/**
+ * Picks the first backup folder that does not exist yet; an existing one is never written to. The folder
+ * number reaches the shared SAVE part as %2: INSTALL hands over to itself as `INSTALL.BAT <number> nnn`
+ * (a plain batch chain, REFERENCES 2.3), runs every check again, and only a %2 equal to the free folder
+ * it finds itself leads on to SAVE, so a number typed by hand can never pick a used folder.
+ */
+function slotChoice(placed: PlacedPc, facts: PcFacts): string[] {
   const root = `${facts.drive}\\${BACKUP_ROOT}`;
   const lines = [
     ...rem(`Find the first free backup folder in ${root}; earlier backups are never touched.`),
-    `IF NOT EXIST ${root}\\NUL MD ${root}`,
-    `IF NOT EXIST ${root}\\NUL GOTO NOSAVE`,
   ];
-  for (let n = 1; n <= BACKUP_SLOTS; n++) lines.push(`IF NOT EXIST ${root}\\${slotName(n)}\\NUL GOTO SAVE${n}`);
+  for (let n = 1; n <= BACKUP_SLOTS; n++) lines.push(`IF NOT EXIST ${root}\\${slotName(n)}\\NUL GOTO SLOT${n}`);
   lines.push('GOTO FULL');
+  for (let n = 1; n <= BACKUP_SLOTS; n++) {
+    lines.push(`:SLOT${n}`, `IF "%2"=="${slotName(n)}" GOTO SAVE`, `${PC_FILES.install} ${placed.pc.stationNumber} ${slotName(n)}`);
+  }
   return lines;
 }
 
@@ -82,16 +88,16 @@ function verifiedCopy(from: string, to: string, fail: string): string[] {
   return [`COPY ${from} ${to} >NUL`, samefile(from, to), `IF ERRORLEVEL 1 GOTO ${fail}`];
 }
 
-/** Writes backup folder n: the originals, the record, SAMEFILE.COM, and RESTORE.BAT last (it marks it complete). */
-function slotSave(facts: PcFacts, n: number): string[] {
-  const dir = `${facts.drive}\\${BACKUP_ROOT}\\${slotName(n)}`;
-  const lines = [`:SAVE${n}`, `MD ${dir}`, `IF NOT EXIST ${dir}\\NUL GOTO NOSAVE`];
+/** Writes backup folder %2: the record, SAMEFILE.COM, the originals, and RESTORE.BAT last (it marks it complete). */
+function save(facts: PcFacts): string[] {
+  const root = `${facts.drive}\\${BACKUP_ROOT}`;
+  const dir = `${root}\\%2`;
+  const lines = [':SAVE', `IF NOT EXIST ${root}\\NUL MD ${root}`, `MD ${dir}`, `IF NOT EXIST ${dir}\\NUL GOTO NOSAVE`];
   lines.push(...verifiedCopy(PC_FILES.sheet, `${dir}\\${SLOT_RECORD}`, 'NOSAVE'));
   lines.push(...verifiedCopy(PC_FILES.samefile, `${dir}\\${PC_FILES.samefile}`, 'NOSAVE'));
   if (facts.hasAutoexecOld) lines.push(...verifiedCopy(`${facts.drive}\\AUTOEXEC.BAT`, `${dir}\\AUTOEXEC.BAT`, 'NOSAVE'));
   if (facts.hasConfigOld) lines.push(...verifiedCopy(`${facts.drive}\\CONFIG.SYS`, `${dir}\\CONFIG.SYS`, 'NOSAVE'));
   lines.push(...verifiedCopy(PC_FILES.restore, `${dir}\\${PC_FILES.restore}`, 'NOSAVE'));
-  lines.push('GOTO NEWFILES');
   return lines;
 }
 
@@ -120,7 +126,7 @@ function nextSteps(placed: PlacedPc, facts: PcFacts): string[] {
 }
 
 function newFiles(placed: PlacedPc, facts: PcFacts): string[] {
-  const lines = [':NEWFILES'];
+  const lines: string[] = [];
   lines.push(...verifiedCopy(PC_FILES.autoexec, `${facts.drive}\\AUTOEXEC.BAT`, 'BADCOPY'));
   if (facts.writesConfig) lines.push(...verifiedCopy(PC_FILES.config, `${facts.drive}\\CONFIG.SYS`, 'BADCOPY'));
   lines.push(...nextSteps(placed, facts), 'GOTO END');
@@ -182,8 +188,7 @@ function stops(placed: PlacedPc, facts: PcFacts): string[] {
 /** The lines of INSTALL.BAT (encode with dosLines). */
 export function installBatLines(placed: PlacedPc): string[] {
   const facts = pcFacts(placed.pc);
-  const lines = [...header(placed), ...preconditions(placed, facts), ...originalsCheck(facts), ...slotChoice(facts)];
-  for (let n = 1; n <= BACKUP_SLOTS; n++) lines.push(...slotSave(facts, n));
-  lines.push(...newFiles(placed, facts), ...notOriginal(placed, facts), ...stops(placed, facts));
+  const lines = [...header(placed), ...preconditions(placed, facts), ...originalsCheck(facts), ...slotChoice(placed, facts)];
+  lines.push(...save(facts), ...newFiles(placed, facts), ...notOriginal(placed, facts), ...stops(placed, facts));
   return lines;
 }

@@ -10,7 +10,7 @@ import { demoBundleSite } from '@/generators/bundle';
 import { bundleBuffer, zipEntries } from '@/tests/support/bundle-zip';
 import { DOS2_COMMANDS, gotoTargets, readBatch } from '@/tests/support/bundle-batch-lint';
 
-const OUR_PROGRAMS = new Set(['SAMEFILE', 'UNDO', 'RESTORE']);
+const OUR_PROGRAMS = new Set(['SAMEFILE', 'UNDO', 'RESTORE', 'INSTALL.BAT']);
 const DRIVE = /^[A-Z]:$/;
 
 let entries: Map<string, Uint8Array>;

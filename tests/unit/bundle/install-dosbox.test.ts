@@ -69,6 +69,8 @@ const CASES: BundleCase[] = [
     id: 'H2', folder: 'RECEPT', drive: originals(pc('RECEPT')),
     folders: ['001', '002', '003', '004', '005', '006', '007', '008', '009'].map((n) => `BWSAVE/${n}`), steps: ['INSTALL 101'],
   },
+  { id: 'I1', folder: 'RECEPT', drive: originals(pc('RECEPT')), steps: ['INSTALL 101 005'] },
+  { id: 'I2', folder: 'RECEPT', drive: originals(pc('STUDIO')), steps: ['D:\\STUDIO\\INSTALL 109'] },
   { id: 'Q1', folder: 'RECEPT', drive: originals(pc('RECEPT')), steps: ['INSTALL 101', 'UNDO'] },
 ];
 
@@ -194,6 +196,21 @@ describe('bundle installers in DOSBox', () => {
     expect([...h2.keys()].filter((k) => k.startsWith('BWSAVE'))).toEqual([]);
     expect(state(h2, ROOT)).toEqual({ 'AUTOEXEC.BAT': text(pc('RECEPT').autoexecOld), 'CONFIG.SYS': text(pc('RECEPT').configOld) });
     expect(log('H2', 0)).toContain('All 9 backup folders in C:\\BWSAVE are used. Nothing was changed.');
+  });
+
+  it('a backup folder number typed by hand is ignored: the first free one is used', () => {
+    const f = files('I1');
+    expect([...f.keys()].filter((k) => k.startsWith('BWSAVE/')).map((k) => k.split('/')[1])).toEqual(Array(5).fill('001'));
+    expect(state(f, ROOT)).toEqual({ 'AUTOEXEC.BAT': text(pc('RECEPT').autoexecNew), 'CONFIG.SYS': text(pc('RECEPT').configNew) });
+  });
+
+  it("another station's INSTALL run from this folder hands over to this folder's INSTALL, which refuses the number", () => {
+    // STUDIO and RECEPT have the same original files (same demo shape), so only the station number tells them apart.
+    expect(Buffer.from(pc('STUDIO').autoexecOld!).equals(Buffer.from(pc('RECEPT').autoexecOld!))).toBe(true);
+    const f = files('I2');
+    expect([...f.keys()].sort()).toEqual(['AUTOEXEC.BAT', 'CONFIG.SYS']);
+    expect(state(f, ROOT)).toEqual({ 'AUTOEXEC.BAT': text(pc('STUDIO').autoexecOld), 'CONFIG.SYS': text(pc('STUDIO').configOld) });
+    expect(log('I2', 0)).toContain('This folder installs station RECEPT, number 101.');
   });
 
   it('tells the technician what to do next and what to watch for (test copy without >NUL)', () => {

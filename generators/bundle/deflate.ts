@@ -1,0 +1,80 @@
+/**
+ * Raw DEFLATE with one pako state kept for every entry of a bundle. JSZip's own DEFLATE builds a fresh
+ * pako Deflate per entry, which allocates and zeroes about 256 KB of tables each time: for a 1,000-station
+ * bundle (8,000+ small entries) that allocation, not the compression, was the largest cost measured.
+ * `deflateReset` gives a state equal to a new one (zlib's contract, kept by the pako port), so the output
+ * is the same bytes JSZip's DEFLATE writes at the same level (checked in tests/unit/bundle/deflate.test.ts).
+ * pako, not Node's zlib: pako is pure JavaScript pinned by the lockfile, so the same input gives the same
+ * zip on every machine and Node version; Node's bundled zlib may change its output between builds.
+ * The pako used is the one JSZip itself depends on.
+ */
+import { dirname } from 'node:path';
+
+type ZStream = {
+  input: Uint8Array | null;
+  next_in: number;
+  avail_in: number;
+  output: Uint8Array | null;
+  next_out: number;
+  avail_out: number;
+};
+
+type PakoDeflate = {
+  deflateInit2(strm: ZStream, level: number, method: number, windowBits: number, memLevel: number, strategy: number): number;
+  deflate(strm: ZStream, flush: number): number;
+  deflateReset(strm: ZStream): number;
+};
+
+const Z_OK = 0;
+const Z_STREAM_END = 1;
+const Z_FINISH = 4;
+const Z_DEFLATED = 8;
+const CHUNK = 64 * 1024;
+
+const jszipDir = dirname(require.resolve('jszip/package.json'));
+const pakoDeflate = require(require.resolve('pako/lib/zlib/deflate', { paths: [jszipDir] })) as PakoDeflate;
+const ZStreamClass = require(require.resolve('pako/lib/zlib/zstream', { paths: [jszipDir] })) as new () => ZStream;
+
+/** A raw (no header) DEFLATE compressor at a fixed level that reuses its tables between inputs. */
+export class RawDeflater {
+  private readonly strm: ZStream;
+  private readonly out = new Uint8Array(CHUNK);
+
+  constructor(readonly level: number) {
+    this.strm = new ZStreamClass();
+    // Same parameters as pako's Deflate with { raw: true, level }: window 2^15, memLevel 8, default strategy.
+    const status = pakoDeflate.deflateInit2(this.strm, level, Z_DEFLATED, -15, 8, 0);
+    if (status !== Z_OK) throw new Error(`pako deflateInit2 failed (${status})`);
+  }
+
+  /** Compresses one whole input; synchronous, so one deflater can serve many bundles in turn. */
+  deflate(input: Uint8Array): Uint8Array {
+    const strm = this.strm;
+    strm.input = input;
+    strm.next_in = 0;
+    strm.avail_in = input.length;
+    const parts: Uint8Array[] = [];
+    let status: number;
+    do {
+      strm.output = this.out;
+      strm.next_out = 0;
+      strm.avail_out = CHUNK;
+      status = pakoDeflate.deflate(strm, Z_FINISH);
+      if (status !== Z_OK && status !== Z_STREAM_END) throw new Error(`pako deflate failed (${status})`);
+      parts.push(this.out.slice(0, strm.next_out));
+    } while (status !== Z_STREAM_END);
+    strm.input = null;
+    pakoDeflate.deflateReset(strm);
+    return parts.length === 1 ? parts[0] : concat(parts);
+  }
+}
+
+function concat(parts: Uint8Array[]): Uint8Array {
+  const out = new Uint8Array(parts.reduce((n, p) => n + p.length, 0));
+  let at = 0;
+  for (const p of parts) {
+    out.set(p, at);
+    at += p.length;
+  }
+  return out;
+}

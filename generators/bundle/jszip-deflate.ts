@@ -1,0 +1,65 @@
+/**
+ * Registers our DEFLATE worker with JSZip 3.10 (pinned in package.json): JSZip looks compression methods
+ * up by name in its `lib/compressions` table, and an entry there with DEFLATE's method id (08 00) makes
+ * ordinary DEFLATE entries that any unzip reads. The worker collects an entry's bytes and compresses them
+ * in one go with the shared RawDeflater (deflate.ts).
+ */
+import { dirname } from 'node:path';
+import { RawDeflater } from './deflate';
+
+type Chunk = { data: Uint8Array; meta: unknown };
+type Worker = {
+  push(chunk: Chunk): void;
+};
+type GenericWorkerClass = {
+  new (name: string): Worker;
+  prototype: { flush(this: Worker): void };
+  call(self: Worker, name: string): void;
+};
+type Compression = { magic: string; compressWorker(options: { level?: number }): Worker; uncompressWorker(): Worker };
+
+const jszipDir = dirname(require.resolve('jszip/package.json'));
+const compressions = require(`${jszipDir}/lib/compressions`) as Record<string, Compression>;
+const GenericWorker = require(`${jszipDir}/lib/stream/GenericWorker`) as GenericWorkerClass;
+
+/** The name to pass as JSZip's `compression` option. */
+export const SHARED_DEFLATE = 'BOOTWRIGHT-DEFLATE';
+
+const deflaters = new Map<number, RawDeflater>();
+
+function deflaterFor(level: number): RawDeflater {
+  let d = deflaters.get(level);
+  if (!d) deflaters.set(level, (d = new RawDeflater(level)));
+  return d;
+}
+
+/** A JSZip worker that buffers one entry and emits it compressed when the entry ends. */
+function createWorker(level: number): Worker {
+  const worker = new GenericWorker('shared DEFLATE') as Worker & {
+    processChunk(chunk: Chunk): void;
+    flush(): void;
+  };
+  const parts: Uint8Array[] = [];
+  let meta: unknown = {};
+  worker.processChunk = (chunk) => {
+    meta = chunk.meta;
+    parts.push(chunk.data);
+  };
+  worker.flush = function flush() {
+    GenericWorker.prototype.flush.call(worker);
+    const input = parts.length === 1 ? parts[0] : Buffer.concat(parts);
+    parts.length = 0;
+    worker.push({ data: deflaterFor(level).deflate(input), meta });
+  };
+  return worker;
+}
+
+if (!compressions[SHARED_DEFLATE]) {
+  const deflate = compressions.DEFLATE;
+  if (!deflate || deflate.magic !== '\x08\x00') throw new Error('JSZip has no DEFLATE method to stand beside');
+  compressions[SHARED_DEFLATE] = {
+    magic: deflate.magic,
+    compressWorker: (options) => createWorker(options.level ?? 6),
+    uncompressWorker: () => deflate.uncompressWorker(),
+  };
+}
