@@ -59,7 +59,7 @@ export function DiffRowView({ row, numbers, onPress, active, marker, testID }: P
 }
 
 const styles = StyleSheet.create({
-  row: { flexDirection: 'row', alignItems: 'flex-start', minHeight: 22, paddingRight: space.sm },
+  row: { flexGrow: 1, flexDirection: 'row', alignItems: 'flex-start', minHeight: 22, paddingRight: space.sm },
   blank: { backgroundColor: colors.surfaceAlt },
   add: { backgroundColor: colors.added },
   del: { backgroundColor: colors.removed },
@@ -70,7 +70,7 @@ const styles = StyleSheet.create({
   sign: { width: 18, textAlign: 'center', fontFamily: fonts.mono, fontSize: 14, lineHeight: 20, fontWeight: '700', color: colors.textMuted },
   signAdd: { color: colors.success },
   signDel: { color: colors.danger },
-  text: { flex: 1, fontFamily: fonts.mono, fontSize: 13, lineHeight: 20, color: colors.text, whiteSpace: 'pre-wrap', wordBreak: 'break-all' } as object,
+  text: { flex: 1, fontFamily: fonts.mono, fontSize: 13, lineHeight: 20, color: colors.text, whiteSpace: 'pre-wrap', overflowWrap: 'anywhere' } as object,
   noEol: { fontFamily: fonts.regular, fontSize: 12, color: colors.textMuted },
   marker: { marginLeft: space.xs },
 });

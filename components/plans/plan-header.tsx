@@ -13,12 +13,12 @@ const short = (h: string | null) => (h ? `${h.slice(0, 12)}…` : 'none');
 
 export function PlanFacts({ view }: { view: PlanView }) {
   const p = view.plan;
-  const made = p.result.inputs?.source === 'user' ? 'from the file the office user sent' : '';
+  const made = p.result.inputs?.source === 'user' ? ' from the file the office user sent' : '';
   return (
     <View style={styles.facts}>
       <PlanStateBadge state={p.state} stale={p.stale} />
       <Small>
-        Revision {p.revision} · made by {p.createdByUser?.name ?? 'unknown'} {made} on {when(p.createdAt)}
+        Revision {p.revision} · made by {p.createdByUser?.name ?? 'unknown'}{made} on {when(p.createdAt)}
         {p.submittedByUser ? ` · sent by ${p.submittedByUser.name} on ${when(p.submittedAt)}` : ''}
         {p.decidedByUser ? ` · ${p.state === 'returned' ? 'returned' : 'decided'} by ${p.decidedByUser.name} on ${when(p.decidedAt)}` : ''}
       </Small>

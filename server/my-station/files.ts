@@ -1,20 +1,21 @@
-// Turns what an office user pasted or uploaded into DOS file bytes: pasted text gets CR LF line ends (what
-// DOS writes) and must fit code page 437; uploaded bytes are kept exactly.
+// Turns what an office user pasted or uploaded into DOS file bytes with the stations' own rules (issue 4's
+// paste encoder and upload checks): pasted text gets CR LF line ends and must fit code page 437; uploaded
+// bytes are kept exactly. Problems come back under the form's field name.
 import type { UserFile } from '@/db/requests/plans';
-import { USER_FILE_MAX_BYTES } from '@/db/requests/plans';
-import { encodeCp437, isCp437Text } from '@/generators/dos/cp437';
+import type { FileKind } from '@/db/requests/stations';
 import { badRequest } from '../http/errors';
+import { uploadProblem } from '../stations/files';
+import { describeProblems, encodePastedText } from '../stations/pasted-text';
 
-export function userFileBytes(file: UserFile, field: string): Uint8Array {
-  if (file.encoding === 'base64') {
-    const bytes = new Uint8Array(Buffer.from(file.data, 'base64'));
-    if (bytes.length > USER_FILE_MAX_BYTES) throw badRequest('That file is too large.', { [field]: 'A startup file has at most 64 KB.' });
-    return bytes;
+export function userFileBytes(file: UserFile, kind: FileKind, field: string): Uint8Array {
+  let bytes: Uint8Array;
+  if (file.encoding === 'base64') bytes = new Uint8Array(Buffer.from(file.data, 'base64'));
+  else {
+    const out = encodePastedText(file.data);
+    if (!out.ok) throw badRequest('The text has characters DOS cannot store.', { [field]: `${describeProblems(out.problems)} (code page 437)` });
+    bytes = out.bytes;
   }
-  const text = file.data.replace(/\r?\n/g, '\r\n');
-  if (!isCp437Text(text)) {
-    const bad = [...text].find((c) => !isCp437Text(c)) ?? '?';
-    throw badRequest('The text has a character DOS cannot store.', { [field]: `“${bad}” is not in the DOS character set (code page 437). Paste the file as it is on the PC.` });
-  }
-  return encodeCp437(text);
+  const problem = uploadProblem(bytes, kind);
+  if (problem) throw badRequest(problem, { [field]: problem });
+  return bytes;
 }

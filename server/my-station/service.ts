@@ -1,7 +1,6 @@
 // The office user's own station: read it, check pasted or uploaded startup files against its profile (the
 // same engine and inputs as the technician's plan), and send them to the technicians, which stores them as
 // a new file revision and opens a draft plan.
-import { startupFile } from '@/db/schema';
 import type { UserEditInput } from '@/db/requests/plans';
 import { decodeCp437 } from '@/generators/dos/cp437';
 import type { AppContext } from '../context';
@@ -12,6 +11,7 @@ import { userFileReceived } from '../plans/notices';
 import { createPlanRepository } from '../plans/repository';
 import { createPlanService } from '../plans/service';
 import { assertCanReadStation, ownStationId } from '../stations/access';
+import { createFileService } from '../stations/files';
 import { loadPlanInput, runPlan, sha256, type FileInput } from '../stations/plan-input';
 import { userFileBytes } from './files';
 
@@ -20,6 +20,7 @@ const fileText = (f: FileInput) => (f.bytes ? decodeCp437(f.bytes) : null);
 export function createMyStationService(ctx: AppContext) {
   const repo = createPlanRepository(ctx.db);
   const plans = createPlanService(ctx);
+  const files = createFileService(ctx);
 
   function summary(me: SessionUser) {
     const id = ownStationId(ctx, me);
@@ -41,8 +42,8 @@ export function createMyStationService(ctx: AppContext) {
 
   function bytesOf(input: UserEditInput) {
     return {
-      autoexec: userFileBytes(input.autoexec, 'autoexec'),
-      config: input.config ? userFileBytes(input.config, 'config') : undefined,
+      autoexec: userFileBytes(input.autoexec, 'AUTOEXEC.BAT', 'autoexec'),
+      config: input.config ? userFileBytes(input.config, 'CONFIG.SYS', 'config') : undefined,
     };
   }
 
@@ -56,31 +57,22 @@ export function createMyStationService(ctx: AppContext) {
 
   /** Stores the files as a new revision of the station's files, opens a draft plan and tells the technicians. */
   async function send(me: SessionUser, stationId: number, input: UserEditInput) {
-    ownStation(me, stationId);
+    const st = ownStation(me, stationId);
     const bytes = bytesOf(input);
     const before = loadPlanInput(ctx, stationId);
     const stored: string[] = [];
-    const now = new Date();
-    ctx.db.transaction((tx) => {
-      for (const [kind, data, current] of [
-        ['AUTOEXEC.BAT', bytes.autoexec, before.autoexec],
-        ['CONFIG.SYS', bytes.config, before.config],
-      ] as const) {
-        if (!data) continue;
-        const hash = sha256(data);
-        if (current.bytes && sha256(current.bytes) === hash) continue;
-        const row = tx
-          .insert(startupFile)
-          .values({ stationId, kind, absent: false, content: Buffer.from(data), sha256: hash, size: data.length, source: 'user', uploadedBy: me.id, uploadedAt: now })
-          .returning({ id: startupFile.id })
-          .get();
-        stored.push(kind);
-        ctx.audit.record(me, { action: 'startup-file.upload', entity: 'station', entityId: stationId, siteId: before.site.id, details: { kind, fileId: row.id, sha256: hash, size: data.length, source: 'user' } });
-      }
-    });
+    for (const [kind, data, current] of [
+      ['AUTOEXEC.BAT', bytes.autoexec, before.autoexec],
+      ['CONFIG.SYS', bytes.config, before.config],
+    ] as const) {
+      // A file byte for byte the one on record is not stored again.
+      if (!data || (current.bytes && sha256(current.bytes) === sha256(data))) continue;
+      files.upload(me, st, kind, data, 'user');
+      stored.push(kind);
+    }
     const plan = plans.createRevision(me, stationId, 'user');
-    const files = stored.length ? stored : ['AUTOEXEC.BAT'];
-    await userFileReceived(ctx, { id: plan.id, revision: plan.revision, stationName: before.station.name, siteName: before.site.name }, me, files);
+    const told = stored.length ? stored : ['AUTOEXEC.BAT'];
+    await userFileReceived(ctx, { id: plan.id, revision: plan.revision, stationName: before.station.name, siteName: before.site.name }, me, told);
     return { planId: plan.id, revision: plan.revision, stored };
   }
 

@@ -101,18 +101,16 @@ export function createPlanRepository(db: Db) {
 
     /** Each station's newest revision (for the plans board), optionally for one site. */
     latestPerStation(siteId?: number) {
-      const newest = db
-        .select({ stationId: planRevision.stationId, id: max(planRevision.id).as('id') })
+      const rows = db
+        .select({ stationId: planRevision.stationId, id: planRevision.id, revision: planRevision.revision, state: planRevision.state })
         .from(planRevision)
-        .groupBy(planRevision.stationId)
-        .as('newest');
-      return db
-        .select({ stationId: newest.stationId, id: planRevision.id, revision: planRevision.revision, state: planRevision.state })
-        .from(newest)
-        .innerJoin(planRevision, eq(planRevision.id, newest.id))
-        .innerJoin(station, eq(station.id, newest.stationId))
+        .innerJoin(station, eq(station.id, planRevision.stationId))
         .where(siteId ? eq(station.siteId, siteId) : undefined)
+        .orderBy(desc(planRevision.id))
         .all();
+      const newest = new Map<number, (typeof rows)[number]>();
+      for (const r of rows) if (!newest.has(r.stationId)) newest.set(r.stationId, r);
+      return [...newest.values()];
     },
 
     revisionsOf(stationId: number) {

@@ -61,6 +61,9 @@ describe('checked edit', () => {
     const euro = await user.post(`/api/my-station/${recept}/check`).send({ autoexec: { encoding: 'text', data: 'ECHO 5 €' } });
     expect(euro.status).toBe(400);
     expect(euro.body.error.fields.autoexec).toMatch(/code page 437/);
+    const binary = await user.post(`/api/my-station/${recept}/check`).send({ autoexec: { encoding: 'base64', data: Buffer.from([0x4d, 0x5a, 0, 1, 2]).toString('base64') } });
+    expect(binary.status).toBe(400);
+    expect(binary.body.error.fields.autoexec).toMatch(/not a text file/);
   });
 
   it('keeps uploaded bytes exactly, including box-drawing bytes and a final Ctrl-Z', async () => {
@@ -91,8 +94,8 @@ describe('sending to the technician', () => {
     expect(plan).toMatchObject({ state: 'draft', createdBy: userIdOf(t, DEMO.user), autoexecInHash: row.sha256 });
     const old = await getPlan(lead, p.plan.id);
     expect(old.plan.state).toBe('superseded');
-    const audit = t.ctx.db.select().from(auditEvent).where(eq(auditEvent.action, 'startup-file.upload')).all();
-    expect(audit.at(-1)).toMatchObject({ actorEmail: DEMO.user, entity: 'station', entityId: String(recept) });
+    const audit = t.ctx.db.select().from(auditEvent).where(eq(auditEvent.action, 'file.user')).orderBy(auditEvent.id).all();
+    expect(audit.at(-2)).toMatchObject({ actorEmail: DEMO.user, entity: 'startup_file', entityId: String(row.id), details: expect.objectContaining({ stationId: recept, sha256: row.sha256 }) });
     // The draft came from the user: a technician sends it, and a lead may approve it.
     const draft = await getPlan(tech, res.body.planId);
     const submitted = await submitPlan(tech, draft, Object.fromEntries(draft.missingReasons.map((k) => [k, 'Checked with Priya at the desk.'])));

@@ -56,6 +56,23 @@ describe('making a revision', () => {
   });
 });
 
+describe('plans board', () => {
+  it('lists every PC with its newest revision, filterable by site', async () => {
+    const id = stationIdOf(t, 'LIBRARY');
+    await createPlan(agents.technician, id);
+    const newest = await createPlan(agents.technician, id);
+    const res = await agents.lead.get('/api/plans/board');
+    expect(res.status).toBe(200);
+    expect(res.body.items).toHaveLength(10);
+    const row = res.body.items.find((i: { station: { name: string } }) => i.station.name === 'LIBRARY');
+    expect(row.plan).toEqual({ id: newest.plan.id, revision: newest.plan.revision, state: 'draft', stale: false });
+    expect(res.body.items.find((i: { station: { name: string } }) => i.station.name === 'HALLPRN')).toBeUndefined();
+    const siteId = row.station.siteId;
+    expect((await agents.technician.get(`/api/plans/board?siteId=${siteId}`)).body.items).toHaveLength(10);
+    expect((await agents.technician.get('/api/plans/board?siteId=9999')).body.items).toHaveLength(0);
+  });
+});
+
 describe('sending for review', () => {
   it('refuses warnings without a written reason, then accepts them with one', async () => {
     const p = await createPlan(agents.technician, stationIdOf(t, 'ACCOUNTS'));
