@@ -76,9 +76,22 @@ function Mine({ data }: { data: Extract<MyStation, { site: unknown }> }) {
         <Heading>Your startup files</Heading>
         <UserEditForm onSubmit={onCheck} busy={check.isPending} onRecord={{ autoexec: data.files.autoexec.text, config: data.files.config.text }} serverFields={checkError?.fields} />
         {checkError ? <Banner tone="error">{checkError.message}</Banner> : null}
+        {checked && !check.isPending ? <CheckedSummary result={checked.result} /> : null}
       </Card>
       {checked ? <Checked result={checked.result} sending={send.isPending} sent={send.data ?? null} error={send.error as ApiError | null} onSend={() => send.mutate(checked.input)} /> : null}
     </Screen>
+  );
+}
+
+/** Right under the button, so a phone shows that the check ran; the details follow below. */
+function CheckedSummary({ result }: { result: PlanResultJson }) {
+  const count = (sev: string) => result.checks.filter((c) => c.severity === sev).length;
+  const added = result.changes.reduce((n, c) => n + c.lines.length, 0);
+  const errors = count('error');
+  return (
+    <Banner tone={errors ? 'error' : 'success'} title="Checked" testID="checked-summary">
+      {`${added} line${added === 1 ? '' : 's'} would change. ${errors} problem${errors === 1 ? '' : 's'}, ${count('warning')} warning${count('warning') === 1 ? '' : 's'}, ${count('note')} note${count('note') === 1 ? '' : 's'}. The details follow below.`}
+    </Banner>
   );
 }
 
