@@ -251,3 +251,10 @@ export type SurveySiteSummary = {
   errors: number;
   warnings: number;
 };
+
+// ---------------------------------------------------------------------------------------------------
+// Ids the computation sees for rows without a short name of their own (readings, terminators).
+
+export const readingRef = (id: number) => `pt-${id}`;
+export const readingIdOf = (ref: string) => Number(ref.replace(/^pt-/, ''));
+export const terminatorRef = (id: number) => `T-${id}`;

@@ -1,14 +1,11 @@
 // Turns the survey's rows into what the computation reads (ids are the technician's refs) and into the
 // rows the API answers with.
-import type {
-  SurveyJackRow, SurveyNodeRow, SurveyReadingRow, SurveyRunRow, SurveySettingsRow, SurveyTerminatorRow,
+import {
+  readingRef, terminatorRef,
+  type SurveyJackRow, type SurveyNodeRow, type SurveyReadingRow, type SurveyRunRow, type SurveySettingsRow, type SurveyTerminatorRow,
 } from '@/db/requests/survey';
 import type { Gauge, SurveyInput } from '@/generators/survey';
 import type { SurveyRows } from './repository';
-
-/** Analysis ids of rows that have no ref of their own. */
-export const readingRef = (id: number) => `pt-${id}`;
-export const terminatorRef = (id: number) => `T-${id}`;
 
 /** A stored voltage back to a number; the text itself is what the API answers with. */
 function volts(text: string | null): number | null {
