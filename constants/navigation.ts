@@ -6,6 +6,7 @@ export type NavItem = { href: string; label: string; glyph: string; roles: Role[
 
 export const NAV_ITEMS: NavItem[] = [
   { href: '/', label: 'Home', glyph: '⌂', roles: ['admin', 'lead', 'technician', 'user'], testID: 'nav-home' },
+  { href: '/survey', label: 'Survey', glyph: '☏', roles: ['admin', 'lead', 'technician'], testID: 'nav-survey' },
   { href: '/people', label: 'People', glyph: '☺', roles: ['admin'], testID: 'nav-people' },
   { href: '/mail', label: 'Mail', glyph: '✉', roles: ['admin'], testID: 'nav-mail' },
   { href: '/plans', label: 'Plans', glyph: '▤', roles: ['technician', 'admin'], testID: 'nav-plans' },

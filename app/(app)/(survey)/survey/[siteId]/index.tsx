@@ -1,0 +1,3 @@
+import { SurveyScreen } from '@/components/survey/survey-screen';
+
+export default SurveyScreen;

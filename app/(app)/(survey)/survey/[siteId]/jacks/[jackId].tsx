@@ -1,0 +1,3 @@
+import { JackScreen } from '@/components/survey/jack-screen';
+
+export default JackScreen;

@@ -1,0 +1,3 @@
+import { SurveyReportScreen } from '@/components/survey/report-screen';
+
+export default SurveyReportScreen;

@@ -1,0 +1,3 @@
+import { SurveySitePickerScreen } from '@/components/survey/site-picker-screen';
+
+export default SurveySitePickerScreen;
