@@ -16,10 +16,7 @@ export function mustHold(
   atStart: boolean,
 ): boolean[] {
   const count = g.n + 1;
-  // Only lines a path reaches count as predecessors: a line after the final program must not spoil a fact.
-  const reach = reachable(g);
-  const preds: number[][] = Array.from({ length: count }, () => []);
-  for (let i = 0; i < g.n; i++) if (reach[i]) for (const j of successors(g, i)) preds[j].push(i);
+  const preds = reachedPredecessors(g);
   const out = new Array<boolean>(count).fill(true);
   // A line no path reaches gets "false": nothing is promised there.
   const inState = (i: number): boolean => {
@@ -36,6 +33,22 @@ export function mustHold(
     }
   }
   return out;
+}
+
+// Only lines a path reaches count as predecessors: a line after the final program must not spoil a fact.
+const predCache = new WeakMap<FlowGraph, number[][]>();
+
+function reachedPredecessors(g: FlowGraph): number[][] {
+  let preds = predCache.get(g);
+  if (!preds) {
+    const reach = reachable(g);
+    const list: number[][] = new Array(g.n + 1);
+    for (let i = 0; i <= g.n; i++) list[i] = [];
+    for (let i = 0; i < g.n; i++) if (reach[i]) for (const j of successors(g, i)) list[j].push(i);
+    preds = list;
+    predCache.set(g, preds);
+  }
+  return preds;
 }
 
 /** The fact just before position p (0 = start of the file), for a block placed there. */

@@ -3,10 +3,27 @@
  * is the same bytes.
  */
 import { decodeCp437, encodeCp437 } from '../dos/cp437';
-import { readBatchLine } from './batch-syntax';
+import { readBatchLine, type BatchSyntax } from './batch-syntax';
 import { readConfigLine } from './config-syntax';
 import { joinLines, splitLines } from './lines';
 import type { BatchLine, BatchModel, ConfigLine, ConfigModel, TextModel } from './model';
+
+// Startup files share most of their lines ("@ECHO OFF", "PATH C:\\DOS"); classifying each distinct line
+// once keeps planning fast. Statements are never changed after classification, so sharing them is safe.
+const batchMemo = new Map<string, BatchSyntax>();
+const MEMO_LIMIT = 20_000;
+
+function classifyBatch(text: string): BatchSyntax {
+  let syntax = batchMemo.get(text);
+  if (syntax === undefined) {
+    syntax = readBatchLine(text);
+    if (text.length <= 200) {
+      if (batchMemo.size >= MEMO_LIMIT) batchMemo.clear();
+      batchMemo.set(text, syntax);
+    }
+  }
+  return syntax;
+}
 
 /** Reads AUTOEXEC.BAT (or any batch file) bytes into a model. */
 export function parseBatch(bytes: Uint8Array): BatchModel {
@@ -19,7 +36,7 @@ export function parseBatchText(source: string): BatchModel {
   const out: BatchLine[] = new Array(lines.length);
   for (let i = 0; i < lines.length; i++) {
     const l = lines[i];
-    const syntax = readBatchLine(l.text);
+    const syntax = classifyBatch(l.text);
     // Built field by field: object spread here was the slowest step of a plan.
     out[i] = { index: l.index, offset: l.offset, text: l.text, eol: l.eol, prefix: syntax.prefix, atSign: syntax.atSign, stmt: syntax.stmt };
   }

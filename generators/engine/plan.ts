@@ -7,7 +7,7 @@ import { planAutoexec, type AutoexecOutcome } from './autoexec-plan';
 import { hasError, lineCheck, profileCheck, type Check, type StartupFileName } from './check';
 import { configFacts } from './config-facts';
 import { kitNeedsConfig, planConfig, type ConfigOutcome } from './config-plan';
-import { unifiedDiff } from './diff';
+import { editsDiff } from './diff';
 import { dosFeatures, parseDosVersion } from './dos-version';
 import { applyEdits, newLineOf } from './edits';
 import { buildFlow, reachable } from './flow';
@@ -27,26 +27,26 @@ export const MAX_FILE_BYTES = 256 * 1024;
 export function plan(input: PlanInput): PlanResult {
   const parsed = parseProfile(input.profile);
   if (!parsed.ok) return refused(input, [profileCheck('profile-invalid', 'error', `The profile is not valid: ${parsed.error}`)]);
-  const unusable = [...fileProblems('AUTOEXEC.BAT', input.autoexec), ...fileProblems('CONFIG.SYS', input.config)];
+  const autoText = input.autoexec && input.autoexec.length <= MAX_FILE_BYTES ? decodeCp437(input.autoexec) : null;
+  const configText = input.config && input.config.length <= MAX_FILE_BYTES ? decodeCp437(input.config) : null;
+  const unusable = [...fileProblems('AUTOEXEC.BAT', input.autoexec, autoText), ...fileProblems('CONFIG.SYS', input.config, configText)];
   if (unusable.length > 0) return refused(input, unusable);
-  return planValid(parsed.profile, input);
+  return planValid(parsed.profile, input, autoText, configText);
 }
 
 /** Checks that make a file unusable: not text, or too large. */
-function fileProblems(name: StartupFileName, bytes: Uint8Array | null): Check[] {
+function fileProblems(name: StartupFileName, bytes: Uint8Array | null, text: string | null): Check[] {
   if (!bytes) return [];
-  if (bytes.length > MAX_FILE_BYTES) {
+  if (bytes.length > MAX_FILE_BYTES || text === null) {
     return [lineCheck('file-too-large', 'error', name, null, `${name} has ${bytes.length} bytes; a startup file over ${MAX_FILE_BYTES / 1024} KB is not planned.`)];
   }
-  const reason = binaryReason(decodeCp437(bytes));
+  const reason = binaryReason(text);
   return reason ? [lineCheck('not-text', 'error', name, null, `${name} cannot be edited: ${reason}.`)] : [];
 }
 
-function planValid(profile: Profile, input: PlanInput): PlanResult {
+function planValid(profile: Profile, input: PlanInput, autoText: string | null, configText: string | null): PlanResult {
   const dos = parseDosVersion(profile.dos);
   const features = dosFeatures(dos);
-  const autoText = input.autoexec ? decodeCp437(input.autoexec) : null;
-  const configText = input.config ? decodeCp437(input.config) : null;
   const configModel = configText === null ? null : parseConfigText(configText);
   const facts = configFacts(configModel);
   const auto = planAutoexec(autoText, { profile, dos, features, upperMemory: facts.upperMemory, configChoices: facts.choices });
@@ -54,15 +54,28 @@ function planValid(profile: Profile, input: PlanInput): PlanResult {
   const autoFile = fileResult('AUTOEXEC.BAT', input.autoexec, autoText, auto.changes);
   const needConfig = input.config !== null || kitNeedsConfig(profile);
   const confFile = needConfig ? fileResult('CONFIG.SYS', input.config, configText, conf.changes) : null;
-  const checks = [...checkProfile(profile), ...auto.checks, ...conf.checks];
+  const checks = [...profileChecksOf(profile), ...auto.checks, ...conf.checks];
   return assemble(input, auto, autoFile, confFile, [...changesOf('AUTOEXEC.BAT', autoText, auto.changes), ...changesOf('CONFIG.SYS', configText, conf.changes)], checks, autoText);
 }
 
+// A validated profile is frozen, so its checks never change: compute them once per profile.
+const profileChecksCache = new WeakMap<Profile, Check[]>();
+
+function profileChecksOf(profile: Profile): Check[] {
+  let checks = profileChecksCache.get(profile);
+  if (!checks) {
+    checks = checkProfile(profile);
+    profileChecksCache.set(profile, checks);
+  }
+  return checks.map((c) => ({ ...c }));
+}
+
 function fileResult(name: StartupFileName, before: Uint8Array | null, beforeText: string | null, changes: PendingChange[]): FileResult {
-  const afterText = applyEdits(beforeText ?? '', changes.map((c) => c.edit));
+  const edits = changes.map((c) => c.edit);
+  const afterText = applyEdits(beforeText ?? '', edits);
   const changed = beforeText === null || afterText !== beforeText;
   const after = changed ? encodeCp437(afterText) : before!;
-  return { name, before, after, beforeText, afterText, changed, diff: unifiedDiff(name, beforeText, afterText) };
+  return { name, before, after, beforeText, afterText, changed, diff: changed ? editsDiff(name, beforeText, edits) : '' };
 }
 
 function changesOf(file: StartupFileName, source: string | null, pending: PendingChange[]): Change[] {
@@ -89,7 +102,8 @@ function assemble(
   autoText: string | null,
 ): PlanResult {
   const autoIn = input.autoexec ? sha256Hex(input.autoexec) : null;
-  const autoOut = sha256Hex(autoFile.after);
+  const autoOut = autoFile.changed || autoIn === null ? sha256Hex(autoFile.after) : autoIn;
+  const configIn = input.config ? sha256Hex(input.config) : null;
   return {
     ok: !hasError(checks),
     changed: autoFile.changed || (confFile?.changed ?? false),
@@ -106,8 +120,8 @@ function assemble(
       output: autoOut,
       autoexecIn: autoIn,
       autoexecOut: autoOut,
-      configIn: input.config ? sha256Hex(input.config) : null,
-      configOut: confFile ? sha256Hex(confFile.after) : null,
+      configIn: configIn,
+      configOut: confFile ? (confFile.changed || configIn === null ? sha256Hex(confFile.after) : configIn) : null,
     },
   };
 }

@@ -81,10 +81,34 @@ export type Profile = z.output<typeof profileSchema>;
 export type ProfileInput = z.input<typeof profileSchema>;
 export type PortEntry = Profile['ports'][number];
 
-/** Validates unknown input; the error is one plain line naming the field, for the CLI and the API. */
+// Profiles this module validated, frozen so they cannot change afterwards: plan() need not validate them again.
+const validated = new WeakSet<object>();
+
+function deepFreeze<T>(value: T): T {
+  if (value && typeof value === 'object') {
+    for (const v of Object.values(value)) deepFreeze(v);
+    Object.freeze(value);
+  }
+  return value;
+}
+
+/** True for a profile returned by parseProfile (validated and frozen). */
+export function isValidatedProfile(value: unknown): value is Profile {
+  return typeof value === 'object' && value !== null && validated.has(value);
+}
+
+/**
+ * Validates unknown input; the error is one plain line naming the field, for the CLI and the API.
+ * The profile returned is frozen.
+ */
 export function parseProfile(input: unknown): { ok: true; profile: Profile } | { ok: false; error: string } {
+  if (isValidatedProfile(input)) return { ok: true, profile: input };
   const result = profileSchema.safeParse(input);
-  if (result.success) return { ok: true, profile: result.data };
+  if (result.success) {
+    const profile = deepFreeze(result.data);
+    validated.add(profile);
+    return { ok: true, profile };
+  }
   const issue = result.error.issues[0];
   const where = issue.path.length > 0 ? issue.path.join('.') : 'profile';
   return { ok: false, error: `${where}: ${issue.message}` };

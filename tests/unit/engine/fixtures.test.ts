@@ -104,3 +104,21 @@ test('GNU patch applies every fixture diff to the original and gives the patched
   });
   expect(planned.length).toBeGreaterThanOrEqual(30);
 });
+
+test("the diffs match the diff package's own line diff (createTwoFilesPatch), except where a moved block reads two ways", () => {
+  // Our hunks come from the edits; the diff package computes its own (Myers) line diff from the two texts.
+  const { createTwoFilesPatch } = jest.requireActual('diff') as typeof import('diff');
+  const headers = { headerOptions: { includeIndex: false, includeUnderline: false, includeFileHeaders: true } };
+  let compared = 0;
+  for (const f of fixtures) {
+    if (f.name === 'block-misplaced') continue;
+    const r = planOf(f);
+    for (const file of [r.files.autoexec, r.files.config]) {
+      if (!file || !file.changed) continue;
+      const theirs = createTwoFilesPatch(`a/${file.name}`, `b/${file.name}`, file.beforeText ?? '', file.afterText, undefined, undefined, { context: 3, ...headers });
+      expect({ name: f.name, diff: file.diff }).toEqual({ name: f.name, diff: theirs });
+      compared++;
+    }
+  }
+  expect(compared).toBeGreaterThanOrEqual(50);
+});
