@@ -69,6 +69,22 @@ export function Hashes({ view }: { view: PlanView }) {
   );
 }
 
+/** Links to the patched files as the plan holds them (the download is recorded in the audit trail). */
+export function FileDownloads({ view }: { view: PlanView }) {
+  const names = ['AUTOEXEC.BAT', ...(view.plan.configOutHash ? ['CONFIG.SYS'] : [])];
+  return (
+    <View style={styles.revs}>
+      <Small>Patched files:</Small>
+      {names.map((n) => (
+        // react-native-web renders a Text with href as a plain link, so the browser downloads the bytes.
+        <Text key={n} style={styles.revLink} testID={`download-${n}`} {...({ href: `/api/plans/${view.plan.id}/files/${n}`, hrefAttrs: { download: n } } as object)}>
+          ⤓ {n}
+        </Text>
+      ))}
+    </View>
+  );
+}
+
 export function RevisionLinks({ view, base }: { view: PlanView; base: '/plans' | '/review' }) {
   if (view.revisions.length < 2) return null;
   return (

@@ -15,7 +15,7 @@ import { FullScreenLoading } from '@/components/shell/loading';
 import { BootPreview } from './boot-preview';
 import { ChecksList } from './checks-list';
 import { CommentsList } from './comments-list';
-import { DecisionNote, Hashes, PlanFacts, RevisionLinks, StaleBanner } from './plan-header';
+import { DecisionNote, FileDownloads, Hashes, PlanFacts, RevisionLinks, StaleBanner } from './plan-header';
 import { PlanDiffs } from './plan-diffs';
 import { ProfileSummary } from './profile-summary';
 import { SubmitForm } from './submit-form';
@@ -75,6 +75,7 @@ function PlanBody({ view }: { view: PlanView }) {
       <Card>
         <Heading>Hashes</Heading>
         <Hashes view={view} />
+        <FileDownloads view={view} />
       </Card>
     </Screen>
   );

@@ -17,7 +17,7 @@ import { FullScreenLoading } from '@/components/shell/loading';
 import { BootPreview } from '@/components/plans/boot-preview';
 import { ChecksList } from '@/components/plans/checks-list';
 import { CommentsList } from '@/components/plans/comments-list';
-import { DecisionNote, Hashes, PlanFacts, RevisionLinks, StaleBanner } from '@/components/plans/plan-header';
+import { DecisionNote, FileDownloads, Hashes, PlanFacts, RevisionLinks, StaleBanner } from '@/components/plans/plan-header';
 import { PlanDiffs } from '@/components/plans/plan-diffs';
 import { ProfileSummary } from '@/components/plans/profile-summary';
 import { CommentForm } from './comment-form';
@@ -131,6 +131,7 @@ function ReviewBody({ view }: { view: PlanView }) {
       <Card>
         <Heading>Hashes</Heading>
         <Hashes view={view} />
+        <FileDownloads view={view} />
       </Card>
     </Screen>
   );

@@ -4,6 +4,7 @@ import { Router } from 'express';
 import { z } from 'zod';
 import { createPlanSchema, planListQuery, saveReasonsSchema, submitPlanSchema } from '@/db/requests/plans';
 import type { AppContext } from '../context';
+import { notFound } from '../http/errors';
 import { currentUser } from '../http/require-role';
 import { body, params, query } from '../http/validate';
 import { EDITORS, STAFF } from '../roles';
@@ -58,6 +59,17 @@ export function plansRouter(ctx: AppContext): Router {
     const input = body(req, submitPlanSchema);
     await plans.submit(currentUser(req), id, input.version, input.reasons);
     res.json(buildPlanView(ctx, id, currentUser(req)));
+  });
+
+  // The patched file exactly as the plan holds it (code page 437 bytes), to copy by hand or compare.
+  r.get('/plans/:id/files/:name', staff, (req, res) => {
+    const { id, name } = params(req, idParams.extend({ name: z.enum(['AUTOEXEC.BAT', 'CONFIG.SYS']) }));
+    const plan = repo.find(id);
+    if (!plan) throw notFound('That plan');
+    const bytes = name === 'AUTOEXEC.BAT' ? plan.autoexecOut : plan.configOut;
+    if (!bytes) throw notFound('That file');
+    ctx.audit.record(currentUser(req), { action: 'plan.download', entity: 'plan', entityId: id, siteId: plans.siteOf(plan), details: { file: name, sha256: name === 'AUTOEXEC.BAT' ? plan.autoexecOutHash : plan.configOutHash } });
+    res.set('Content-Type', 'application/octet-stream').set('Content-Disposition', `attachment; filename="${name}"`).send(bytes);
   });
 
   return r;

@@ -35,6 +35,23 @@ describe('making a revision', () => {
     expect(body.plan.stale).toBe(false);
   });
 
+  it('hands out the patched bytes and records the download', async () => {
+    const p = await createPlan(agents.technician, stationIdOf(t, 'ARCHIVE'));
+    const row = t.ctx.db.select().from(planRevision).where(eq(planRevision.id, p.plan.id)).get()!;
+    const res = await agents.lead.get(`/api/plans/${p.plan.id}/files/AUTOEXEC.BAT`).buffer(true).parse((r, cb) => {
+      const chunks: Buffer[] = [];
+      r.on('data', (c: Buffer) => chunks.push(c));
+      r.on('end', () => cb(null, Buffer.concat(chunks)));
+    });
+    expect(res.status).toBe(200);
+    expect(Buffer.compare(res.body as Buffer, row.autoexecOut)).toBe(0);
+    expect(res.headers['content-disposition']).toBe('attachment; filename="AUTOEXEC.BAT"');
+    expect((await agents.user.get(`/api/plans/${p.plan.id}/files/AUTOEXEC.BAT`)).status).toBe(403);
+    expect((await agents.lead.get(`/api/plans/${p.plan.id}/files/OTHER.SYS`)).status).toBe(400);
+    const audit = t.ctx.audit.list({ action: 'plan.download', limit: 5, offset: 0 });
+    expect(audit[0]).toMatchObject({ entityId: String(p.plan.id), actorEmail: DEMO.lead, details: { file: 'AUTOEXEC.BAT', sha256: row.autoexecOutHash } });
+  });
+
   it('supersedes the older revisions of the station but not other stations', async () => {
     const id = stationIdOf(t, 'DRAFT2');
     const first = await createPlan(agents.technician, id);

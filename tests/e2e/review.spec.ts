@@ -81,3 +81,26 @@ for (const [size, stationName] of [[PHONE, 'STUDIO'], [DESK, 'DRAFT2']] as const
     expect(errors).toEqual([]);
   });
 }
+
+test('two leads approve at once: one wins, the other sees the fresh view', async ({ browser, baseURL }) => {
+  const tech = await pageAs(browser, 'tech@bootwright.test', DESK, baseURL!);
+  const a = await pageAs(browser, 'lead@bootwright.test', DESK, baseURL!);
+  const b = await pageAs(browser, 'lead2@bootwright.test', PHONE, baseURL!);
+  const made = await tech.request.post('/api/plans', { data: { stationId: (await stationId(tech, 'LIBRARY')) } });
+  const plan = (await made.json()) as { plan: { id: number; version: number } };
+  expect((await tech.request.post(`/api/plans/${plan.plan.id}/submit`, { data: { version: plan.plan.version } })).status()).toBe(200);
+  await a.goto(`/review/${plan.plan.id}`);
+  await b.goto(`/review/${plan.plan.id}`);
+  await expect(b.getByTestId('approve')).toBeEnabled();
+  await a.getByTestId('approve').click();
+  await expect(a.getByTestId('plan-state')).toHaveText('✓ Approved');
+  await b.getByTestId('approve').click();
+  await expect(b.getByTestId('decision-error')).toContainText('approved');
+  await expect(b.getByTestId('plan-state')).toHaveText('✓ Approved');
+  await expect(b.getByTestId('decision-card')).toContainText('not waiting for review');
+});
+
+async function stationId(page: Page, name: string): Promise<number> {
+  const board = (await (await page.request.get('/api/plans/board')).json()) as { items: Array<{ station: { id: number; name: string } }> };
+  return board.items.find((i) => i.station.name === name)!.station.id;
+}
