@@ -7,7 +7,7 @@
  */
 import JSZip from 'jszip';
 import { Coalesce } from './coalesce';
-import { SHARED_DEFLATE } from './jszip-deflate';
+import { JSZIP_METHOD } from './jszip-deflate';
 import { bundleEntries, placePcs, SITE_FILES } from './layout';
 import type { PlacedPc } from './layout';
 import { LazySource } from './lazy-source';
@@ -134,8 +134,8 @@ export function buildBundle(site: BundleSite, opts: BundleBuildOptions = {}): No
   const zipped = zip.generateNodeStream({
     type: 'nodebuffer',
     streamFiles: true,
-    // DEFLATE (method 8) through our shared pako state, see deflate.ts; JSZip's types list only its own names.
-    compression: SHARED_DEFLATE as 'DEFLATE',
+    // DEFLATE (method 8) through our deflater (deflate.ts); JSZip's types list only its own method names.
+    compression: JSZIP_METHOD[opts.deflate ?? 'pako'] as 'DEFLATE',
     compressionOptions: { level: BUNDLE_DEFLATE_LEVEL },
     platform: 'DOS',
   });

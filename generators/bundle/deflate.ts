@@ -1,5 +1,5 @@
 /**
- * Raw DEFLATE with one pako state kept for every entry of a bundle. JSZip's own DEFLATE builds a fresh
+ * Raw DEFLATE for the bundle's entries. Default: one pako state kept for every entry of a bundle. JSZip's own DEFLATE builds a fresh
  * pako Deflate per entry, which allocates and zeroes about 256 KB of tables each time: for a 1,000-station
  * bundle (8,000+ small entries) that allocation, not the compression, was the largest cost measured.
  * `deflateReset` gives a state equal to a new one (zlib's contract, kept by the pako port), so the output
@@ -9,6 +9,7 @@
  * The pako used is the one JSZip itself depends on.
  */
 import { dirname } from 'node:path';
+import { deflateRawSync } from 'node:zlib';
 
 type ZStream = {
   input: Uint8Array | null;
@@ -36,7 +37,7 @@ const pakoDeflate = require(require.resolve('pako/lib/zlib/deflate', { paths: [j
 const ZStreamClass = require(require.resolve('pako/lib/zlib/zstream', { paths: [jszipDir] })) as new () => ZStream;
 
 /** A raw (no header) DEFLATE compressor at a fixed level that reuses its tables between inputs. */
-export class RawDeflater {
+export class RawDeflater implements Deflater {
   private readonly strm: ZStream;
   private readonly out = new Uint8Array(CHUNK);
 
@@ -77,4 +78,23 @@ function concat(parts: Uint8Array[]): Uint8Array {
     at += p.length;
   }
   return out;
+}
+
+/** Which DEFLATE implementation compresses the entries (both write standard DEFLATE, method 8). */
+export type DeflateEngine = 'pako' | 'node-zlib';
+
+/** The interface both engines share: one whole input in, its raw DEFLATE stream out. */
+export type Deflater = { deflate(input: Uint8Array): Uint8Array };
+
+/**
+ * Node's zlib (C): several times faster than pako, but its bytes are only as stable as the zlib that
+ * Node bundles, which has changed between Node releases; use it where speed matters more than getting
+ * the identical zip back after an upgrade.
+ */
+export class NodeZlibDeflater implements Deflater {
+  constructor(readonly level: number) {}
+
+  deflate(input: Uint8Array): Uint8Array {
+    return deflateRawSync(input, { level: this.level });
+  }
 }

@@ -5,7 +5,8 @@
  * in one go with the shared RawDeflater (deflate.ts).
  */
 import { dirname } from 'node:path';
-import { RawDeflater } from './deflate';
+import { NodeZlibDeflater, RawDeflater } from './deflate';
+import type { Deflater, DeflateEngine } from './deflate';
 
 type Chunk = { data: Uint8Array; meta: unknown };
 type Worker = {
@@ -22,19 +23,23 @@ const jszipDir = dirname(require.resolve('jszip/package.json'));
 const compressions = require(`${jszipDir}/lib/compressions`) as Record<string, Compression>;
 const GenericWorker = require(`${jszipDir}/lib/stream/GenericWorker`) as GenericWorkerClass;
 
-/** The name to pass as JSZip's `compression` option. */
-export const SHARED_DEFLATE = 'BOOTWRIGHT-DEFLATE';
+/** The name to pass as JSZip's `compression` option for each engine. */
+export const JSZIP_METHOD: Record<DeflateEngine, string> = {
+  pako: 'BOOTWRIGHT-DEFLATE',
+  'node-zlib': 'BOOTWRIGHT-DEFLATE-ZLIB',
+};
 
-const deflaters = new Map<number, RawDeflater>();
+const deflaters = new Map<string, Deflater>();
 
-function deflaterFor(level: number): RawDeflater {
-  let d = deflaters.get(level);
-  if (!d) deflaters.set(level, (d = new RawDeflater(level)));
+function deflaterFor(engine: DeflateEngine, level: number): Deflater {
+  const key = `${engine}:${level}`;
+  let d = deflaters.get(key);
+  if (!d) deflaters.set(key, (d = engine === 'pako' ? new RawDeflater(level) : new NodeZlibDeflater(level)));
   return d;
 }
 
 /** A JSZip worker that buffers one entry and emits it compressed when the entry ends. */
-function createWorker(level: number): Worker {
+function createWorker(engine: DeflateEngine, level: number): Worker {
   const worker = new GenericWorker('shared DEFLATE') as Worker & {
     processChunk(chunk: Chunk): void;
     flush(): void;
@@ -49,17 +54,19 @@ function createWorker(level: number): Worker {
     GenericWorker.prototype.flush.call(worker);
     const input = parts.length === 1 ? parts[0] : Buffer.concat(parts);
     parts.length = 0;
-    worker.push({ data: deflaterFor(level).deflate(input), meta });
+    worker.push({ data: deflaterFor(engine, level).deflate(input), meta });
   };
   return worker;
 }
 
-if (!compressions[SHARED_DEFLATE]) {
+for (const engine of Object.keys(JSZIP_METHOD) as DeflateEngine[]) {
+  const name = JSZIP_METHOD[engine];
+  if (compressions[name]) continue;
   const deflate = compressions.DEFLATE;
   if (!deflate || deflate.magic !== '\x08\x00') throw new Error('JSZip has no DEFLATE method to stand beside');
-  compressions[SHARED_DEFLATE] = {
+  compressions[name] = {
     magic: deflate.magic,
-    compressWorker: (options) => createWorker(options.level ?? 6),
+    compressWorker: (options) => createWorker(engine, options.level ?? 6),
     uncompressWorker: () => deflate.uncompressWorker(),
   };
 }

@@ -62,6 +62,12 @@ export type BundleSite = {
 export type BundleBuildOptions = {
   /** Called after each PC folder has been written into the stream: (folders done, folders in total). */
   onProgress?: (done: number, total: number) => void;
+  /**
+   * DEFLATE implementation. 'pako' (default): pure JavaScript pinned by the lockfile, the same zip on every
+   * machine and Node version. 'node-zlib': Node's C zlib, several times faster, but its bytes may change
+   * when Node's bundled zlib does. Both write standard DEFLATE at the same level.
+   */
+  deflate?: 'pako' | 'node-zlib';
 };
 
 /** One planned zip entry: its full name inside the zip and, for station files, the PC it belongs to. */

@@ -129,6 +129,17 @@ describe('bundle zip', () => {
     expect(() => buildBundle({ ...site, generatedAt: 'yesterday' })).toThrow(RangeError);
   });
 
+  it("with Node's zlib as the deflater still writes a zip Info-ZIP accepts, with the same entries and contents", async () => {
+    const fast = await bundleBuffer(site, { deflate: 'node-zlib' });
+    const fastFile = saved('zlib.zip', fast);
+    expect(unzipTest(fastFile).status).toBe(0);
+    expect(unzipNames(fastFile)).toEqual(bundleLayout(site));
+    const a = await zipEntries(fast);
+    const b = await zipEntries(buffer);
+    expect([...a.keys()]).toEqual([...b.keys()]);
+    for (const [name, bytes] of a) expect(Buffer.from(bytes).equals(Buffer.from(b.get(name)!))).toBe(true);
+  });
+
   it('fails the stream, not the process, when a plan cannot be rendered', async () => {
     const bad: BundleSite = { ...site, pcs: [{ ...site.pcs[0], bootDrive: '1' }] };
     await expect(bundleBuffer(bad)).rejects.toThrow(/drive letter/);
