@@ -14,6 +14,7 @@ export type QueueItem = {
   siteId: number;
   siteName: string;
   createdByName: string;
+  submittedByName: string;
   submittedAt: string | null;
   warnings: number;
   notes: number;

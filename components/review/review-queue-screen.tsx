@@ -45,7 +45,7 @@ function QueueRow({ item }: { item: QueueItem }) {
             {item.stationName} <Text style={styles.muted}>· revision {item.revision}</Text>
           </Text>
           <Small>
-            {item.siteName} · sent by {item.createdByName}
+            {item.siteName} · sent by {item.submittedByName}
             {item.submittedAt ? ` on ${new Date(item.submittedAt).toLocaleString()}` : ''}
           </Small>
         </View>

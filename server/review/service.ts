@@ -30,6 +30,7 @@ export function createReviewService(ctx: AppContext) {
           warnings: checks.filter((c) => c.severity === 'warning').length,
           notes: checks.filter((c) => c.severity === 'note').length,
           stale: !freshnessOf(ctx, full).current,
+          submittedByName: repo.userName(full.submittedBy)?.name ?? p.createdByName,
         };
       });
   }
