@@ -26,6 +26,7 @@ export type AutoexecContext = {
   features: DosFeatures;
   /** CONFIG.SYS provides upper memory (DOS=UMB). */
   upperMemory: boolean;
+  configGiven: boolean;
   configChoices: string[] | null;
 };
 
@@ -138,11 +139,12 @@ function blockLines(view: readonly BatchLine[], graph: FlowGraph, p: number, ctx
   if (!pathOk) {
     notes.push(lineCheck('mode-full-path', 'note', F, null, `PATH does not hold ${profile.dosDir} on every path to the block, so MODE is written with its full path.`));
   }
-  if (!features.atSign && !holdsBefore(mustHold(graph, view, echoTransfer, false), p, false)) {
+  if (!features.atSign && !holdsBefore(mustHold(graph, view, echoTransfer(features.atSign), false), p, false)) {
     notes.push(lineCheck('echo-visible', 'note', F, null, 'This DOS has no "@" (before 3.3) and ECHO is not off before the block, so its lines show on screen at boot.'));
   }
   if (features.loadHigh && profile.loadHigh === 'auto' && !useLoadHigh(profile, features, ctx.upperMemory)) {
-    notes.push(lineCheck('loadhigh-unavailable', 'note', 'CONFIG.SYS', null, 'CONFIG.SYS has no DOS=UMB, so the resident program loads into conventional memory (no LH).'));
+    const why = ctx.configGiven ? 'CONFIG.SYS has no DOS=UMB' : 'No CONFIG.SYS was given, so no DOS=UMB is known';
+    notes.push(lineCheck('loadhigh-unavailable', 'note', 'CONFIG.SYS', null, `${why}; the resident program loads into conventional memory (no LH).`));
   }
   const at = features.atSign ? '@' : '';
   const commands = [serialSetupCommand(profile, features, mode), redirectCommand(profile, mode), loaderCommand(profile, features, ctx.upperMemory)];

@@ -36,6 +36,26 @@ export function modeTarget(args: string): ModeTarget {
   return null;
 }
 
+const BAUD_LONG: Record<string, string> = { '11': '110', '15': '150', '30': '300', '60': '600', '12': '1200', '24': '2400', '48': '4800', '96': '9600', '19': '19200', '19.2': '19200', '19.2K': '19200' };
+
+/**
+ * Baud, parity, data and stop bits of a serial setup in either form (REFERENCES 1.1 positional, 1.2 keyword,
+ * 1.8 abbreviations), or null when a field is missing: then the old line cannot be called the same as ours.
+ */
+export function serialSettings(settings: string): string | null {
+  const s = settings.trim().toUpperCase();
+  let fields: (string | undefined)[];
+  if (/BAUD\s*=/.test(s)) {
+    const get = (k: string) => new RegExp(`\\b${k}\\s*=\\s*([^\\s]+)`).exec(s)?.[1];
+    fields = [get('BAUD'), get('PARITY') ?? get('PAR'), get('DATA'), get('STOP')];
+  } else {
+    fields = s.split(',').map((f) => f.trim());
+  }
+  const [baud, parity, data, stop] = fields;
+  if (!baud || !parity || !data || !stop) return null;
+  return [BAUD_LONG[baud] ?? baud, parity[0], data, stop].join(',');
+}
+
 function squeeze(text: string): string {
   return text.trim().toUpperCase().replace(/^[:\s]+/, '').replace(/\s+/g, ' ');
 }
@@ -69,8 +89,8 @@ function modeConflict(input: ConflictInput, i: number, args: string): Conflict |
   const { network, redirect } = input.profile;
   const lineNo = input.lines[i].index + 1;
   if (t?.kind === 'serial' && t.port === network.port) {
-    const ours = squeeze(input.ourSerialArgs.replace(/^COM\d:?/i, ''));
-    const same = t.settings === ours;
+    const ours = serialSettings(input.ourSerialArgs.replace(/^COM\d:?/i, ''));
+    const same = ours !== null && serialSettings(t.settings) === ours;
     return {
       index: i,
       slug: same ? 'serial-setup-duplicate' : 'serial-setup-replaced',

@@ -85,8 +85,15 @@ export function pathValue(stmt: Statement): string | null {
   return null;
 }
 
-/** Transfer for "ECHO is off". */
-export function echoTransfer(line: BatchLine, before: boolean): boolean {
+/**
+ * Transfer for "ECHO is off". Before DOS 3.3 a line starting with @ fails (REFERENCES 2.1), so
+ * `@ECHO OFF` turns nothing off there.
+ */
+export function echoTransfer(atSignWorks: boolean) {
+  return (line: BatchLine, before: boolean): boolean => (line.atSign && !atSignWorks ? before : echoStep(line, before));
+}
+
+function echoStep(line: BatchLine, before: boolean): boolean {
   const s = innermost(line.stmt);
   if (s.kind !== 'internal' || s.command !== 'ECHO') return before;
   const word = s.args.trim().toUpperCase();

@@ -49,7 +49,7 @@ function planValid(profile: Profile, input: PlanInput, autoText: string | null, 
   const features = dosFeatures(dos);
   const configModel = configText === null ? null : parseConfigText(configText);
   const facts = configFacts(configModel);
-  const auto = planAutoexec(autoText, { profile, dos, features, upperMemory: facts.upperMemory, configChoices: facts.choices });
+  const auto = planAutoexec(autoText, { profile, dos, features, upperMemory: facts.upperMemory, configGiven: configModel !== null, configChoices: facts.choices });
   const conf: ConfigOutcome = planConfig(configModel, profile, features);
   const autoFile = fileResult('AUTOEXEC.BAT', input.autoexec, autoText, auto.changes);
   const needConfig = input.config !== null || kitNeedsConfig(profile);

@@ -168,6 +168,24 @@ describe('limits and paths', () => {
     expect(r.files.autoexec.afterText.split('\r\n')[0]).toBe(':: Bootwright off: MODE LPT1:=COM2: > NUL');
   });
 
+  test('[M4C] TBATCH.ASM, [3COM]: before 3.3 "@ECHO OFF" fails, so ECHO stays on and the block lines show (REFERENCES 2.1)', () => {
+    const echo = (file: string) => slugs({ dos: '3.20' }).length >= 0 && plan({ profile: { ...BASE, dos: '3.20' }, autoexec: Buffer.from(file), config: null }).checks.map((c) => c.slug);
+    expect(echo('@ECHO OFF\r\nPATH C:\\DOS\r\nWIN\r\n')).toContain('echo-visible');
+    expect(echo('ECHO OFF\r\nPATH C:\\DOS\r\nWIN\r\n')).not.toContain('echo-visible');
+    const at33 = plan({ profile: { ...BASE, dos: '3.30' }, autoexec: Buffer.from('@ECHO OFF\r\nWIN\r\n'), config: null });
+    expect(at33.checks.map((c) => c.slug)).not.toContain('echo-visible');
+  });
+
+  test('[HELP622], [M4] MODEPARS.ASM: an older setup of the same port with the same values, in either form, is a duplicate (REFERENCES 1.1, 1.2, 1.8)', () => {
+    const old = (line: string) => plan({ profile: BASE, autoexec: Buffer.from(`${line}\r\nWIN\r\n`), config: null }).checks.map((c) => c.slug);
+    expect(old('MODE COM1:96,N,8,1')).toContain('serial-setup-duplicate');
+    expect(old('mode com1 baud=9600 parity=n data=8 stop=1')).toContain('serial-setup-duplicate');
+    expect(old('MODE COM1:96,E,7,1')).toContain('serial-setup-replaced');
+    // An omitted field may mean another value in another DOS (REFERENCES 1.13), so it is not the same setup.
+    expect(old('MODE COM1:96,N,8')).toContain('serial-setup-replaced');
+    expect(old('MODE COM2:96,N,8,1')).not.toContain('serial-setup-replaced');
+  });
+
   test('marker lines fit in 80 columns', () => {
     for (const line of block({}).filter((l) => l.includes('REM'))) expect(line.length).toBeLessThanOrEqual(80);
   });
