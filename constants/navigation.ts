@@ -6,7 +6,9 @@ export type NavItem = { href: string; label: string; glyph: string; roles: Role[
 
 export const NAV_ITEMS: NavItem[] = [
   { href: '/', label: 'Home', glyph: '⌂', roles: ['admin', 'lead', 'technician', 'user'], testID: 'nav-home' },
+  { href: '/sites', label: 'Sites', glyph: '▦', roles: ['admin', 'lead', 'technician'], testID: 'nav-sites' },
   { href: '/survey', label: 'Survey', glyph: '☏', roles: ['admin', 'lead', 'technician'], testID: 'nav-survey' },
+  { href: '/kits', label: 'Kits', glyph: '◆', roles: ['admin', 'technician'], testID: 'nav-kits' },
   { href: '/people', label: 'People', glyph: '☺', roles: ['admin'], testID: 'nav-people' },
   { href: '/mail', label: 'Mail', glyph: '✉', roles: ['admin'], testID: 'nav-mail' },
   { href: '/plans', label: 'Plans', glyph: '▤', roles: ['technician', 'admin'], testID: 'nav-plans' },

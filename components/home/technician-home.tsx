@@ -7,7 +7,7 @@ export function TechnicianHome(_: { me: Me }) {
   return (
     <View style={homeStyles.grid}>
       <View style={homeStyles.cell}>
-        <TaskCard testID="home-card-sites" title="Sites and stations" text="Record each office's PCs, printers and modems, fill in every PC's profile, and make the plan for its startup files." />
+        <TaskCard testID="home-card-sites" title="Sites and stations" text="Record each office's PCs, printers and modems, fill in every PC's profile, and make the plan for its startup files." href="/sites" linkLabel="Open the sites" />
       </View>
       <View style={{ width: '100%' }}>
         <SafetyNote />

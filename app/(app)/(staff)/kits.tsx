@@ -1,0 +1,3 @@
+import { KitsScreen } from '@/components/kits/kits-screen';
+
+export default KitsScreen;

@@ -1,0 +1,3 @@
+import { SiteScreen } from '@/components/sites/site-screen';
+
+export default SiteScreen;

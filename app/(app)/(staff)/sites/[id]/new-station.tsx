@@ -1,0 +1,3 @@
+import { NewStationScreen } from '@/components/wizard/new-station-screen';
+
+export default NewStationScreen;

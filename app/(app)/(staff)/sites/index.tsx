@@ -1,0 +1,3 @@
+import { SitesScreen } from '@/components/sites/sites-screen';
+
+export default SitesScreen;

@@ -1,0 +1,3 @@
+import { StationScreen } from '@/components/stations/station-screen';
+
+export default StationScreen;

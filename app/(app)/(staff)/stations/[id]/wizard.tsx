@@ -1,0 +1,3 @@
+import { WizardScreen } from '@/components/wizard/wizard-screen';
+
+export default WizardScreen;
