@@ -1,5 +1,5 @@
 import { useEffect, useMemo, useRef, useState } from 'react';
-import { ScrollView, StyleSheet, Text, View } from 'react-native';
+import { Pressable, ScrollView, StyleSheet, Text, View } from 'react-native';
 import Svg, { Circle, G, Line, Polygon, Polyline, Rect, Text as SvgText } from 'react-native-svg';
 import type { SurveyView } from '@/db/requests/survey';
 import { colors, fonts, space } from '@/constants/theme';
@@ -10,7 +10,6 @@ import { Button } from '@/components/ui/button';
 
 type Props = { view: SurveyView; marks: DrawingMarks; highlight: Highlight; onSelect: (s: Selection) => void; width: number };
 
-const FLAG_ROW = 28;
 const NODE_R = 12;
 
 type Point = { x: number; y: number };
@@ -18,12 +17,11 @@ type Point = { x: number; y: number };
 /**
  * The network as drawn by layoutSurvey: runs with their lengths, points by kind, terminators. A flagged
  * run or point (named by an error or a warning) is dashed, carries a "!" badge and the check's slug;
- * checks on the network as a whole are flagged in a row above. Pressing a part selects it.
+ * checks on the network as a whole are flagged in a row above, outside the sideways scroll. Pressing a part selects it.
  */
 export function SurveyDrawing({ view, marks, highlight, onSelect, width }: Props) {
-  const top = marks.networkWide.length * FLAG_ROW;
-  const pos = useMemo(() => new Map(view.drawing.nodes.map((n) => [n.id, { x: n.x, y: n.y + top }])), [view.drawing, top]);
-  const size = { w: Math.max(view.drawing.size.width, 420), h: view.drawing.size.height + top + 30 };
+  const pos = useMemo(() => new Map(view.drawing.nodes.map((n) => [n.id, { x: n.x, y: n.y }])), [view.drawing]);
+  const size = { w: Math.max(view.drawing.size.width, 420), h: view.drawing.size.height + 30 };
   // Full size keeps the labels readable and scrolls sideways; "whole network" shrinks it to fit.
   const [whole, setWhole] = useState(false);
   const fit = Math.min(1, width / size.w);
@@ -37,7 +35,10 @@ export function SurveyDrawing({ view, marks, highlight, onSelect, width }: Props
     const xs = [...nodes].map((id) => pos.get(id)?.x)
       .concat([...runs].map((ref) => runMid(view, pos, ref)?.x))
       .filter((x): x is number => x !== undefined);
-    if (xs.length > 0) scroller.current?.scrollTo({ x: Math.max(0, Math.min(...xs) * scale - 80), animated: true });
+    if (xs.length === 0) return;
+    // After layout: a scroll asked for before the content is measured is lost.
+    const timer = setTimeout(() => scroller.current?.scrollTo({ x: Math.max(0, Math.min(...xs) * scale - 80), animated: true }), 60);
+    return () => clearTimeout(timer);
   }, [highlight, marks, pos, scale, view]);
 
   return (
@@ -48,12 +49,16 @@ export function SurveyDrawing({ view, marks, highlight, onSelect, width }: Props
           <Text style={styles.legendItem}>{whole ? 'Shrunk to fit.' : 'Scroll sideways to see the whole network.'}</Text>
         </View>
       ) : null}
+      {marks.networkWide.length > 0 ? (
+        <View style={styles.bar}>
+          {marks.networkWide.map((f) => (
+            <NetworkFlag key={f.index} check={f.check} selected={highlight.checks.has(f.index)} onPress={() => onSelect({ kind: 'check', index: f.index })} />
+          ))}
+        </View>
+      ) : null}
       <ScrollView horizontal ref={scroller} contentContainerStyle={{ width: size.w * scale }}>
         <Svg width={size.w * scale} height={size.h * scale} viewBox={`0 0 ${size.w} ${size.h}`} accessibilityLabel="Drawing of the network">
           <Rect x={0} y={0} width={size.w} height={size.h} fill={colors.surface} />
-          {marks.networkWide.map((f, i) => (
-            <NetworkFlag key={f.index} y={8 + i * FLAG_ROW} check={f.check} selected={highlight.checks.has(f.index)} onPress={() => onSelect({ kind: 'check', index: f.index })} />
-          ))}
           {view.input.runs.map((r) => {
             const a = pos.get(r.from);
             const b = pos.get(r.to);
@@ -84,7 +89,7 @@ function Badge({ x, y, text, testID }: { x: number; y: number; text: string; tes
   const w = 18 + text.length * 6.8;
   return (
     <G testID={testID}>
-      <Rect x={x - 9} y={y - 9} width={w} height={18} rx={9} fill={colors.dangerSoft} stroke={colors.danger} strokeWidth={1} />
+      {text ? <Rect x={x - 9} y={y - 9} width={w} height={18} rx={9} fill={colors.dangerSoft} stroke={colors.danger} strokeWidth={1} /> : null}
       <Circle cx={x} cy={y} r={7} fill={colors.danger} />
       <SvgText x={x} y={y + 4} fontSize={11} fontFamily={fonts.bold} fill={colors.primaryText} textAnchor="middle">
         !
@@ -121,7 +126,7 @@ function RunMark({ id, a, b, lengthFt, cord, flags, selected, onPress }: {
       <SvgText x={lx + 4} y={mid.y + 4} fontSize={12} fontFamily={selected || flagged ? fonts.bold : fonts.regular} fill={flagged ? colors.danger : colors.text}>
         {text}
       </SvgText>
-      {flagged ? <Badge x={lx + 9} y={mid.y + 20} text={flagLabel(flags!)} testID={`drawing-flag-run-${id}`} /> : null}
+      {flagged ? <Badge x={lx + 9} y={mid.y - 20} text={flagLabel(flags!)} testID={`drawing-flag-run-${id}`} /> : null}
     </G>
   );
 }
@@ -155,7 +160,7 @@ function NodeMark({ id, kind, label, p, terminators, flags, selected, onPress }:
           </SvgText>
         </G>
       ))}
-      {flagged ? <Badge x={p.x - 40} y={p.y + NODE_R + 30} text={flagLabel(flags!)} testID={`drawing-flag-node-${id}`} /> : null}
+      {flagged ? <Badge x={p.x - NODE_R - 6} y={p.y - NODE_R} text="" testID={`drawing-flag-node-${id}`} /> : null}
     </G>
   );
 }
@@ -166,12 +171,21 @@ function resistor(x: number, y: number): string {
   return pts.map(([dx, dy]) => `${x + dx},${y + dy}`).join(' ');
 }
 
-function NetworkFlag({ y, check, selected, onPress }: { y: number; check: SurveyCheck; selected: boolean; onPress: () => void }) {
+/** A check on the network as a whole (no part to put it on): flagged above the drawing, never scrolled away. */
+function NetworkFlag({ check, selected, onPress }: { check: SurveyCheck; selected: boolean; onPress: () => void }) {
   return (
-    <G testID={`drawing-flag-${check.slug}`} dataSet={{ selected: String(selected) }} onPress={onPress} aria-label={`Flagged for the whole network: ${check.slug}`}>
-      {selected ? <Rect x={4} y={y - 3} width={20 + (check.slug.length + 18) * 6.8} height={24} rx={12} fill={colors.focus} fillOpacity={0.3} /> : null}
-      <Badge x={18} y={y + 9} text={`${check.slug} · whole network`} testID={`drawing-flag-badge-${check.slug}`} />
-    </G>
+    <Pressable
+      accessibilityRole="button"
+      aria-pressed={selected}
+      accessibilityLabel={`Flagged for the whole network: ${check.slug}`}
+      testID={`drawing-flag-${check.slug}`}
+      {...({ dataSet: { selected: String(selected) } } as object)}
+      onPress={onPress}
+      style={StyleSheet.flatten([styles.netFlag, selected && styles.netFlagOn])}
+    >
+      <Text style={styles.netMark}>!</Text>
+      <Text style={styles.netText}>{check.slug} · whole network</Text>
+    </Pressable>
   );
 }
 
@@ -195,4 +209,11 @@ const styles = StyleSheet.create({
   legendItem: { fontFamily: fonts.regular, fontSize: 12, color: colors.textMuted },
   flag: { color: colors.danger },
   ok: { color: colors.success },
+  netFlag: {
+    flexDirection: 'row', alignItems: 'center', gap: space.sm, minHeight: 36, paddingHorizontal: space.md, borderRadius: 18,
+    borderWidth: 2, borderStyle: 'dashed', borderColor: colors.danger, backgroundColor: colors.dangerSoft,
+  },
+  netFlagOn: { borderStyle: 'solid', borderColor: colors.focus, backgroundColor: '#FFF7F0' },
+  netMark: { fontFamily: fonts.bold, fontSize: 13, color: colors.primaryText, backgroundColor: colors.danger, width: 20, height: 20, lineHeight: 20, borderRadius: 10, textAlign: 'center' },
+  netText: { fontFamily: fonts.semibold, fontSize: 14, color: colors.danger },
 });

@@ -21,12 +21,15 @@ export function SurveySummary({ view }: { view: SurveyView }) {
   return (
     <Card testID="survey-summary">
       <View style={styles.counts}>
-        {(['error', 'warning', 'note'] as const).map((s) => (
-          <Text key={s} style={[styles.count, { color: SEVERITY[s].fg, backgroundColor: SEVERITY[s].bg }]} testID={`survey-count-${s}`}>
-            {SEVERITY[s].mark} {r.counts[s]} {SEVERITY[s].word.toLowerCase()}
-            {r.counts[s] === 1 ? '' : 's'}
-          </Text>
-        ))}
+        {(['error', 'warning', 'note'] as const).map((s) => {
+          const none = r.counts[s] === 0;
+          return (
+            <Text key={s} style={[styles.count, none ? styles.none : { color: SEVERITY[s].fg, backgroundColor: SEVERITY[s].bg }]} testID={`survey-count-${s}`}>
+              {none ? '✓' : SEVERITY[s].mark} {r.counts[s]} {SEVERITY[s].word.toLowerCase()}
+              {r.counts[s] === 1 ? '' : 's'}
+            </Text>
+          );
+        })}
       </View>
       <View style={styles.facts}>
         {facts.map(([k, v]) => (
@@ -43,6 +46,7 @@ export function SurveySummary({ view }: { view: SurveyView }) {
 const styles = StyleSheet.create({
   counts: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm },
   count: { fontFamily: fonts.semibold, fontSize: 14, paddingHorizontal: space.md, paddingVertical: space.xs, borderRadius: 6 },
+  none: { color: colors.textMuted, backgroundColor: colors.surfaceAlt },
   facts: { gap: 2 },
   fact: { fontFamily: fonts.regular, fontSize: 14, lineHeight: 20, color: colors.text },
   key: { fontFamily: fonts.semibold },
