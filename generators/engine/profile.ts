@@ -21,7 +21,10 @@ const portName = z
 const comName = portName.refine((p) => p.startsWith('COM'), 'a serial port such as COM1');
 const lptName = portName.refine((p) => p.startsWith('LPT'), 'a parallel port such as LPT1');
 
-const dosPath = z.string().trim().min(1).max(127);
+// Lines we write must encode to code page 437 byte for byte; printable ASCII is safe in every code page.
+const PRINTABLE = /^[\x20-\x7e]*$/;
+const printable = 'printable ASCII characters only';
+const dosPath = z.string().trim().min(1).max(127).regex(PRINTABLE, printable);
 
 export const portSchema = z.object({
   name: portName,
@@ -46,7 +49,7 @@ export const kitSchema = z.object({
   residentKB: z.number().min(0).max(640),
   files: z.number().int().min(8).max(255).optional(),
   buffers: z.number().int().min(1).max(99).optional(),
-  configLines: z.array(z.string().max(127)).max(20).optional(),
+  configLines: z.array(z.string().max(127).regex(PRINTABLE, printable)).max(20).optional(),
 });
 
 export const profileSchema = z.object({
@@ -62,7 +65,7 @@ export const profileSchema = z.object({
   ports: z.array(portSchema).max(16),
   network: networkSchema,
   redirect: z.object({ from: lptName, to: comName }).nullable(),
-  loader: z.object({ path: dosPath, args: z.string().max(127).default('') }),
+  loader: z.object({ path: dosPath, args: z.string().max(127).regex(PRINTABLE, printable).default('') }),
   /** "auto" (detected), "none", or the 1-based AUTOEXEC.BAT line of the program that may never return. */
   finalProgram: z.union([z.literal('auto'), z.literal('none'), z.number().int().min(1)]).default('auto'),
   loadHigh: z.enum(['auto', 'never']).default('auto'),

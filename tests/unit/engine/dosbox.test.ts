@@ -5,6 +5,7 @@
  * program that ran before still runs in the same order. All runs share one DOSBox start.
  * Fixtures that hit DOSBox differences (REFERENCES.md §7) are kept out; their expect.json says why.
  */
+import { rmSync } from 'node:fs';
 import { plan } from '../../../generators/engine/index';
 import { requireTool, runDosbox, type DosboxRun, type StubEntry } from '../../support/dosbox';
 import { blockEntries, buildTree, dosboxCopy, entryOf, stemOf } from './helpers/dos-tree';
@@ -34,6 +35,11 @@ const cases: Case[] = loadFixtures()
 
 let logs = new Map<string, StubEntry[]>();
 let seconds = 0;
+const roots: string[] = [];
+
+afterAll(() => {
+  for (const root of roots) rmSync(root, { recursive: true, force: true });
+});
 
 beforeAll(() => {
   requireTool('dosbox', 'dosbox');
@@ -47,6 +53,7 @@ beforeAll(() => {
     const boot = (text: string | null) => (text === null ? commands : [...commands, 'CALL C:\\AUTOEXEC.BAT']);
     runs.push({ name: `${c.id}:before`, root: buildTree(c.before, texts, options), commands: boot(c.before) });
     runs.push({ name: `${c.id}:after`, root: buildTree(c.after, texts, options), commands: boot(c.after) });
+    roots.push(runs[runs.length - 2].root, runs[runs.length - 1].root);
   }
   const out = runDosbox(runs, 90_000);
   if (out.timedOut) throw new Error('DOSBox did not finish within 90 s (does a fixture loop?)');

@@ -120,3 +120,9 @@ test('profile.ts and profile-checks.ts import no Node built-ins and no iconv-lit
   visit(join(engine, 'profile-checks.ts'));
   expect(seen.size).toBeGreaterThanOrEqual(4);
 });
+
+test('paths and options we write must be printable ASCII, so they encode to code page 437 unchanged', () => {
+  const r = parseProfile({ ...ISSUE_FORM, loader: { path: 'C:\\NETKIT\\NETRES.COM', args: '/N:\u20ac' } });
+  expect(r.ok).toBe(false);
+  if (!r.ok) expect(r.error).toBe('loader.args: printable ASCII characters only');
+});

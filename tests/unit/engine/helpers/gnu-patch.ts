@@ -3,7 +3,7 @@
  * its original files, `patch -p1` runs there, and the patched files are read back.
  */
 import { spawnSync } from 'node:child_process';
-import { existsSync, mkdirSync, mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
+import { existsSync, mkdirSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { requireTool } from '../../../support/dosbox';
@@ -25,7 +25,7 @@ export function applyWithGnuPatch(cases: PatchCase[]): PatchOutcome[] {
   done`;
   const run = spawnSync('bash', ['-c', script], { encoding: 'utf8' });
   if (run.status !== 0) throw new Error(`patch batch failed: ${run.stderr}`);
-  return cases.map((c, i) => {
+  const outcomes = cases.map((c, i) => {
     const files: Record<string, Buffer | null> = {};
     for (const name of Object.keys(c.files)) {
       const f = join(root, String(i), name);
@@ -34,4 +34,6 @@ export function applyWithGnuPatch(cases: PatchCase[]): PatchOutcome[] {
     const rc = readFileSync(join(root, `${i}.rc`), 'utf8').trim();
     return { ok: rc === '0', output: readFileSync(join(root, `${i}.out`), 'utf8'), files };
   });
+  rmSync(root, { recursive: true, force: true });
+  return outcomes;
 }
