@@ -42,8 +42,16 @@ export function pcFacts(pc: BundlePc): PcFacts {
  * parameters, REFERENCES 2.9), and no leading ON/OFF word, which ECHO would take as its switch.
  */
 export function echoSafe(text: string): string {
-  const cleaned = text.replace(/[<>|%\x00-\x1f\x7f]/g, ' ').replace(/\s+/g, ' ').trim();
+  const cleaned = squeeze(text);
   return /^(on|off)\b/i.test(cleaned) ? `- ${cleaned}` : cleaned;
+}
+
+const UNSAFE = /[<>|%\x00-\x1f\x7f]|\s\s|^\s|\s$|[^\S ]/;
+
+/** Blanks for `<`, `>`, `|`, `%` and control characters, runs of blanks made one, ends trimmed. */
+function squeeze(text: string): string {
+  if (!UNSAFE.test(text)) return text;
+  return text.replace(/[<>|%\x00-\x1f\x7f]/g, ' ').replace(/\s+/g, ' ').trim();
 }
 
 /** ECHO lines that show `text` wrapped to 80 columns. */
@@ -55,8 +63,7 @@ export function echo(text: string): string[] {
 
 /** REM lines for a comment; REM cannot hold `>`, `<` or `|` (REFERENCES 2.6, [HELP622] REM). */
 export function rem(text: string): string[] {
-  const safe = text.replace(/[<>|%\x00-\x1f\x7f]/g, ' ').replace(/\s+/g, ' ').trim();
-  return wrapWords(safe, DOS_COLUMNS, 'REM ', 'REM ');
+  return wrapWords(squeeze(text), DOS_COLUMNS, 'REM ', 'REM ');
 }
 
 /** Leaves `name`'s check result in ERRORLEVEL: 0 same, 1 different, 2 missing (samefile.asm). */

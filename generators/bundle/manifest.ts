@@ -4,8 +4,7 @@
  * file; its rows are longer than 80 columns (a SHA-256 alone is 64), it is read by programs, not on screen.
  */
 import { createHash } from 'node:crypto';
-import { encodeCp437 } from '../dos/cp437';
-import { plainText } from './text';
+import { encodeDos, plainText } from './text';
 
 export type ManifestRow = {
   stationNumber: number | null;
@@ -43,5 +42,5 @@ function csvRow(row: ManifestRow): string {
 /** The manifest's bytes for `rows` in the given order. */
 export function manifestBytes(rows: readonly ManifestRow[]): Uint8Array {
   const lines = [MANIFEST_HEADER.join(','), ...rows.map(csvRow)];
-  return encodeCp437(lines.join('\r\n') + '\r\n');
+  return encodeDos(lines.join('\r\n') + '\r\n');
 }

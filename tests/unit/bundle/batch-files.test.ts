@@ -14,7 +14,17 @@ const OUR_PROGRAMS = new Set(['SAMEFILE', 'UNDO', 'RESTORE', 'INSTALL.BAT']);
 const DRIVE = /^[A-Z]:$/;
 
 let entries: Map<string, Uint8Array>;
-const site = demoBundleSite();
+const demo = demoBundleSite();
+// The demo office plus two awkward plans: a station name full of batch metacharacters and a PC that
+// boots from D:.
+const site = {
+  ...demo,
+  pcs: [
+    ...demo.pcs,
+    { ...demo.pcs[0], stationName: 'Plot >room| 100% & "back"', stationNumber: 150, planRevisionId: 'rev<150>|%1' },
+    { ...demo.pcs[1], stationName: 'DBOOT', stationNumber: 151, bootDrive: 'd' },
+  ],
+};
 
 beforeAll(async () => {
   entries = await zipEntries(await bundleBuffer(site));
@@ -43,7 +53,7 @@ describe('bundle batch files', () => {
   });
 
   it('writes @ECHO OFF from DOS 4.0 on and plain ECHO OFF on 3.30, with no @ anywhere else', () => {
-    for (const pc of site.pcs) {
+    for (const pc of demo.pcs) {
       const folder = pc.stationName;
       for (const file of ['INSTALL.BAT', 'UNDO.BAT', 'RESTORE.BAT']) {
         const lines = readBatch(entries.get(`${folder}/${file}`)!);
@@ -73,6 +83,25 @@ describe('bundle batch files', () => {
         if (line.command === 'REM' || line.command === 'ECHO') expect(line.text).not.toMatch(/[<>|]/);
       }
     }
+  });
+
+  it('keeps batch metacharacters of a station name out of every command, ECHO and REM line', () => {
+    const lines = ['INSTALL.BAT', 'UNDO.BAT', 'RESTORE.BAT'].flatMap((f) => readBatch(entries.get(`PLOTROOM/${f}`)!));
+    const redirects = lines.filter((l) => /[<>|]/.test(l.text) && !/ >NUL$/.test(l.text));
+    expect(redirects).toEqual([]);
+    const percents = lines.filter((l) => l.text.includes('%') && !/%[12]/.test(l.text));
+    expect(percents).toEqual([]);
+    expect(lines.some((l) => l.text.includes('Plot room 100 & "back"'))).toBe(true);
+  });
+
+  it('writes every path on the boot drive the plan names (D: here), never C:', () => {
+    const lines = ['INSTALL.BAT', 'UNDO.BAT', 'RESTORE.BAT'].flatMap((f) => readBatch(entries.get(`DBOOT/${f}`)!));
+    const text = lines.map((l) => l.text);
+    expect(text).toContain('SAMEFILE D:\\AUTOEXEC.BAT AUTOEXEC.OLD');
+    expect(text).toContain('IF NOT EXIST D:\\BWSAVE\\001\\NUL GOTO SLOT1');
+    expect(text).toContain('D:');
+    // Only the boot preview (the PC's own program paths, shown with ECHO) may name C:.
+    expect(lines.filter((l) => l.command !== 'ECHO' && /C:/i.test(l.text))).toEqual([]);
   });
 
   it('asks for the station number and stops on every failed check before it writes anything', () => {
