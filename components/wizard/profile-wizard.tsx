@@ -119,7 +119,7 @@ export function ProfileWizard({ detail, kits, nextNumbers, readOnly, openAt }: P
   );
   const status = (
     <View style={{ gap: space.sm }}>
-      {readOnly ? <Banner tone="note">You can read this profile; technicians and admins change it.</Banner> : null}
+      {readOnly ? <Banner tone="note" testID="wizard-read-only">You can read this profile; technicians and admins change it.</Banner> : null}
       {problem ? (
         <Banner tone="error" title={problem.stale ? 'Changed by someone else' : 'Not saved'} testID="wizard-problem">
           {problem.stale ? `${problem.message} Reload the page to see the newer version.` : problem.message}
