@@ -4,17 +4,18 @@ import type { Role } from '@/hooks/use-session';
 
 export type NavItem = { href: string; label: string; glyph: string; roles: Role[]; testID: string };
 
+// Order matters: on a phone the bottom bar shows each role's first four, the rest sit under More.
 export const NAV_ITEMS: NavItem[] = [
   { href: '/', label: 'Home', glyph: '⌂', roles: ['admin', 'lead', 'technician', 'user'], testID: 'nav-home' },
+  { href: '/review', label: 'Review', glyph: '✓', roles: ['lead'], testID: 'nav-review' },
+  { href: '/my-station', label: 'My PC', glyph: '▣', roles: ['user'], testID: 'nav-my-station' },
   { href: '/sites', label: 'Sites', glyph: '▦', roles: ['admin', 'lead', 'technician'], testID: 'nav-sites' },
+  { href: '/plans', label: 'Plans', glyph: '▤', roles: ['technician', 'admin'], testID: 'nav-plans' },
   { href: '/survey', label: 'Survey', glyph: '☏', roles: ['admin', 'lead', 'technician'], testID: 'nav-survey' },
   { href: '/kits', label: 'Kits', glyph: '◆', roles: ['admin', 'technician'], testID: 'nav-kits' },
   { href: '/people', label: 'People', glyph: '☺', roles: ['admin'], testID: 'nav-people' },
-  { href: '/mail', label: 'Mail', glyph: '✉', roles: ['admin'], testID: 'nav-mail' },
-  { href: '/plans', label: 'Plans', glyph: '▤', roles: ['technician', 'admin'], testID: 'nav-plans' },
-  { href: '/review', label: 'Review', glyph: '✓', roles: ['lead'], testID: 'nav-review' },
-  { href: '/my-station', label: 'My PC', glyph: '▣', roles: ['user'], testID: 'nav-my-station' },
   { href: '/audit', label: 'Audit', glyph: '☰', roles: ['admin'], testID: 'nav-audit' },
+  { href: '/mail', label: 'Mail', glyph: '✉', roles: ['admin'], testID: 'nav-mail' },
 ];
 
 export function navFor(role: Role): NavItem[] {
