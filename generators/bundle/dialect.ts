@@ -5,13 +5,6 @@
  * so the only per-version difference is how echo is switched off.
  */
 
-/** Internal commands of COMMAND.COM 2.0 (REFERENCES 2.4, [M2] TDATA.ASM COMTAB). */
-export const DOS2_INTERNAL_COMMANDS = [
-  'DIR', 'REN', 'RENAME', 'DEL', 'ERASE', 'TYPE', 'REM', 'COPY', 'PAUSE', 'DATE', 'TIME', 'VER', 'VOL',
-  'CD', 'CHDIR', 'MD', 'MKDIR', 'RD', 'RMDIR', 'BREAK', 'VERIFY', 'SET', 'PROMPT', 'PATH', 'EXIT', 'CTTY',
-  'ECHO', 'GOTO', 'SHIFT', 'IF', 'FOR', 'CLS',
-] as const;
-
 export type BatchDialect = {
   /** The version as comparable number: 3.30 -> 330. */
   version: number;

@@ -15,7 +15,6 @@ type Worker = {
 type GenericWorkerClass = {
   new (name: string): Worker;
   prototype: { flush(this: Worker): void };
-  call(self: Worker, name: string): void;
 };
 type Compression = { magic: string; compressWorker(options: { level?: number }): Worker; uncompressWorker(): Worker };
 

@@ -17,6 +17,13 @@ function putBack(facts: PcFacts, name: 'AUTOEXEC.BAT' | 'CONFIG.SYS', had: boole
   return [`IF EXIST ${target} DEL ${target}`, `IF EXIST ${target} GOTO FAILED`];
 }
 
+/** What the FAILED message tells the technician to copy by hand. */
+function keptFiles(facts: PcFacts): string {
+  const kept = [facts.hasAutoexecOld ? 'AUTOEXEC.BAT' : null, facts.writesConfig && facts.hasConfigOld ? 'CONFIG.SYS' : null]
+    .filter((name): name is string => name !== null);
+  return kept.length > 0 ? `copy ${kept.join(' and ')} from here to ${facts.drive}\\ by hand, ` : '';
+}
+
 export function restoreBatLines(placed: PlacedPc): string[] {
   const { pc } = placed;
   const facts = pcFacts(pc);
@@ -53,8 +60,8 @@ export function restoreBatLines(placed: PlacedPc): string[] {
     'GOTO END',
     ':FAILED',
     ...echo(
-      'A file could not be put back. The backup is still in this folder: copy AUTOEXEC.BAT and CONFIG.SYS ' +
-        `from here to ${facts.drive}\\ by hand, or start from the boot floppy.`,
+      `A file could not be put back. The backup is still in this folder: ${keptFiles(facts)}` +
+        'or start the PC from the boot floppy.',
     ),
     ':END',
   );
