@@ -71,6 +71,7 @@ export function SurveyDrawing({ view, marks, highlight, onSelect, width }: Props
             const terminators = view.input.terminators.filter((t) => t.nodeId === n.id);
             return <NodeMark key={n.id} id={n.id} kind={n.kind} label={n.label} p={p} terminators={terminators.map((t) => t.ohms)} flags={marks.nodes.get(n.id)} selected={highlight.nodes.has(n.id)} onPress={() => onSelect({ kind: 'node', ref: n.id })} />;
           })}
+          <Badges view={view} marks={marks} pos={pos} onSelect={onSelect} />
         </Svg>
       </ScrollView>
       <Legend />
@@ -83,6 +84,30 @@ function runMid(view: SurveyView, pos: Map<string, Point>, ref: string): Point |
   const a = r && pos.get(r.from);
   const b = r && pos.get(r.to);
   return a && b ? { x: (a.x + b.x) / 2, y: (a.y + b.y) / 2 } : undefined;
+}
+
+/** Drawn last, so no line crosses a badge: a run's badge names its check, a point's is the "!" alone (its own label names it). */
+function Badges({ view, marks, pos, onSelect }: { view: SurveyView; marks: DrawingMarks; pos: Map<string, Point>; onSelect: (s: Selection) => void }) {
+  return (
+    <G>
+      {view.input.runs.map((r) => {
+        const flags = marks.runs.get(r.id);
+        const a = pos.get(r.from);
+        const b = pos.get(r.to);
+        if (!flags || !a || !b) return null;
+        const { mid, lx } = labelSpot(a, b, `${r.lengthFt} ft`);
+        return (
+          <G key={r.id} onPress={() => onSelect({ kind: 'run', ref: r.id })}>
+            <Badge x={lx + 9} y={mid.y - 20} text={flagLabel(flags)} testID={`drawing-flag-run-${r.id}`} />
+          </G>
+        );
+      })}
+      {[...marks.nodes.keys()].map((id) => {
+        const p = pos.get(id);
+        return p ? <Badge key={id} x={p.x - NODE_R - 6} y={p.y - NODE_R} text="" testID={`drawing-flag-node-${id}`} /> : null;
+      })}
+    </G>
+  );
 }
 
 function Badge({ x, y, text, testID }: { x: number; y: number; text: string; testID: string }) {
@@ -101,17 +126,21 @@ function Badge({ x, y, text, testID }: { x: number; y: number; text: string; tes
   );
 }
 
+/** Where a run's length label goes: 70% of the way to the lower end, where runs fanning out of a hub are
+ * apart; beside a vertical cord, on a slanted wall run. */
+function labelSpot(a: Point, b: Point, text: string) {
+  const [top, low] = a.y <= b.y ? [a, b] : [b, a];
+  const mid = { x: top.x + (low.x - top.x) * 0.7, y: top.y + (low.y - top.y) * 0.7 };
+  const tw = text.length * 7 + 8;
+  return { mid, tw, lx: a.x === b.x ? mid.x + 6 : mid.x - tw / 2 };
+}
+
 function RunMark({ id, a, b, lengthFt, cord, flags, selected, onPress }: {
   id: string; a: Point; b: Point; lengthFt: number; cord: boolean; flags?: SurveyCheck[]; selected: boolean; onPress: () => void;
 }) {
   const flagged = !!flags;
-  // The label sits 70% of the way to the lower end, where the runs fanning out of a hub are apart.
-  const [top, low] = a.y <= b.y ? [a, b] : [b, a];
-  const mid = { x: top.x + (low.x - top.x) * 0.7, y: top.y + (low.y - top.y) * 0.7 };
   const text = `${lengthFt} ft`;
-  const tw = text.length * 7 + 8;
-  // A vertical cord carries its label beside it; a slanted wall run carries it on the line.
-  const lx = a.x === b.x ? mid.x + 6 : mid.x - tw / 2;
+  const { mid, tw, lx } = labelSpot(a, b, text);
   return (
     <G testID={`drawing-run-${id}`} dataSet={{ flagged: String(flagged), selected: String(selected) }} onPress={onPress} aria-label={`Run ${id}, ${text}${flagged ? `, flagged: ${flags!.map((c) => c.slug).join(', ')}` : ''}`}>
       {selected ? <Line x1={a.x} y1={a.y} x2={b.x} y2={b.y} stroke={colors.focus} strokeOpacity={0.4} strokeWidth={12} strokeLinecap="round" /> : null}
@@ -126,7 +155,6 @@ function RunMark({ id, a, b, lengthFt, cord, flags, selected, onPress }: {
       <SvgText x={lx + 4} y={mid.y + 4} fontSize={12} fontFamily={selected || flagged ? fonts.bold : fonts.regular} fill={flagged ? colors.danger : colors.text}>
         {text}
       </SvgText>
-      {flagged ? <Badge x={lx + 9} y={mid.y - 20} text={flagLabel(flags!)} testID={`drawing-flag-run-${id}`} /> : null}
     </G>
   );
 }
@@ -160,7 +188,6 @@ function NodeMark({ id, kind, label, p, terminators, flags, selected, onPress }:
           </SvgText>
         </G>
       ))}
-      {flagged ? <Badge x={p.x - NODE_R - 6} y={p.y - NODE_R} text="" testID={`drawing-flag-node-${id}`} /> : null}
     </G>
   );
 }

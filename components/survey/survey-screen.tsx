@@ -80,7 +80,7 @@ export function SurveyScreen() {
           ) : null}
         </View>
       ) : null}
-      {tab === 'wiring' ? <WiringEditor view={view} canEdit={canEdit} writes={writes} /> : null}
+      {tab === 'wiring' ? <WiringEditor view={view} canEdit={canEdit} writes={writes} wide={wide} /> : null}
     </SurveyFrame>
   );
 }

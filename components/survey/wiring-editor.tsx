@@ -20,18 +20,22 @@ type Props = { view: SurveyView; canEdit: boolean; writes: Writes };
 const flagging = (checks: SurveyCheck[]) => checks.filter((c) => c.severity !== 'note');
 
 /** The network as wired, to edit: settings, cable runs, points and terminators. */
-export function WiringEditor({ view, canEdit, writes }: Props) {
+export function WiringEditor({ view, canEdit, writes, wide }: Props & { wide: boolean }) {
   return (
-    <View style={styles.wrap} testID="wiring-editor">
-      <RunsSection view={view} canEdit={canEdit} writes={writes} />
-      <TerminatorsSection view={view} canEdit={canEdit} writes={writes} />
-      <NodesSection view={view} canEdit={canEdit} writes={writes} />
-      {canEdit ? (
-        <Card>
-          <Heading>Settings</Heading>
-          <SettingsForm settings={view.settings} nodes={view.nodes} onSubmit={(v) => writes.updateSettings(v)} />
-        </Card>
-      ) : null}
+    <View style={[styles.wrap, wide && styles.wide]} testID="wiring-editor">
+      <View style={wide ? styles.main : styles.wrap}>
+        <RunsSection view={view} canEdit={canEdit} writes={writes} />
+      </View>
+      <View style={wide ? styles.side : styles.wrap}>
+        <TerminatorsSection view={view} canEdit={canEdit} writes={writes} />
+        {canEdit ? (
+          <Card>
+            <Heading>Settings</Heading>
+            <SettingsForm settings={view.settings} nodes={view.nodes} onSubmit={(v) => writes.updateSettings(v)} />
+          </Card>
+        ) : null}
+        <NodesSection view={view} canEdit={canEdit} writes={writes} />
+      </View>
     </View>
   );
 }
@@ -76,8 +80,8 @@ function RunsSection({ view, canEdit, writes }: Props) {
             testID={`run-${r.ref}`}
             title={`${r.ref}: ${label.get(r.fromNodeId)} → ${label.get(r.toNodeId)}`}
             details={[
-              `${r.lengthFt} ft · ${r.gauge} AWG · ${res?.kind === 'cord' ? 'cord' : 'wall wiring'} · ${r.reverses ? 'reverses the pair' : 'straight through'}`,
-              res?.loopOhms != null ? `Loop resistance ${res.loopOhms.toFixed(2)} Ω` : 'Loop resistance unknown',
+              `${r.lengthFt} ft · ${r.gauge} AWG · ${res?.kind === 'cord' ? 'cord' : 'wall wiring'} · ${r.reverses ? 'reverses the pair' : 'straight through'} · ` +
+                (res?.loopOhms != null ? `loop ${res.loopOhms.toFixed(2)} Ω` : 'loop unknown'),
             ]}
             flags={checks.filter((c) => c.runIds.includes(r.ref))}
             canEdit={canEdit}
@@ -170,6 +174,9 @@ function NodesSection({ view, canEdit, writes }: Props) {
 
 const styles = StyleSheet.create({
   wrap: { gap: space.xl },
+  wide: { flexDirection: 'row', alignItems: 'flex-start' },
+  main: { flex: 3, gap: space.xl, minWidth: 0 },
+  side: { flex: 2, gap: space.xl, minWidth: 0 },
   section: { gap: space.sm },
   sectionHead: { flexDirection: 'row', flexWrap: 'wrap', justifyContent: 'space-between', alignItems: 'flex-end', gap: space.sm },
 });
