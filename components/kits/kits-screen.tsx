@@ -23,7 +23,7 @@ export function KitsScreen() {
   return (
     <Screen title="Kits" subtitle="The network software each PC gets: its resident program, serial settings and needs." testID="kits-screen" actions={canEdit && editing !== 'new' ? <Button label="+ New kit" testID="kit-new" onPress={() => setEditing('new')} /> : null}>
       {editing === 'new' ? (
-        <Card>
+        <Card style={styles.formCard}>
           <Heading>New kit</Heading>
           {createError && Object.keys(createError.fields).length === 0 ? <Banner tone="error">{createError.message}</Banner> : null}
           <KitForm busy={create.isPending} serverFields={createError?.fields} onCancel={() => setEditing(null)} onSubmit={(v) => create.mutateAsync(v).then(() => setEditing(null)).catch(() => undefined)} />
@@ -72,6 +72,7 @@ function EditKit({ kit, onDone }: { kit: Kit; onDone: () => void }) {
 const styles = StyleSheet.create({
   grid: { flexDirection: 'row', flexWrap: 'wrap', gap: space.lg },
   card: { flexGrow: 1, flexBasis: 340, maxWidth: 620 },
+  formCard: { maxWidth: 720 },
   actions: { flexDirection: 'row', gap: space.sm },
   link: { fontFamily: fonts.semibold, color: colors.primary },
 });

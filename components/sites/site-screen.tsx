@@ -119,7 +119,7 @@ function EditSite({ siteId, onDone }: { siteId: number; onDone: () => void }) {
   const update = useUpdateSiteMutation(siteId);
   const error = update.error instanceof ApiError ? update.error : null;
   return (
-    <Card testID="edit-site">
+    <Card testID="edit-site" style={{ maxWidth: 720 }}>
       <Heading>Site details</Heading>
       {error ? <Banner tone="error">{error.code === 'stale' ? `${error.message}` : error.message}</Banner> : null}
       <SiteForm

@@ -32,7 +32,7 @@ export function SitesScreen() {
   return (
     <Screen title="Sites" subtitle="The client offices and their stations." testID="sites-screen" actions={canEdit && !adding ? <Button label="+ New site" testID="site-new" onPress={() => setAdding(true)} /> : null}>
       {adding ? (
-        <Card>
+        <Card style={{ maxWidth: 720 }}>
           <Heading>New site</Heading>
           {error && Object.keys(error.fields).length === 0 ? <Banner tone="error">{error.message}</Banner> : null}
           <SiteForm submitLabel="Create site" busy={create.isPending} serverFields={error?.fields} onCancel={() => setAdding(false)} onSubmit={(v) => create.mutateAsync(v).then(() => setAdding(false)).catch(() => undefined)} />

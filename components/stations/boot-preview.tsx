@@ -24,15 +24,17 @@ function BootList({ title, steps, loaderPath, testID }: { title: string; steps: 
       {steps.map((s, i) => (
         <View key={`${s.line}-${i}`} style={[styles.step, isLoader(s) && styles.loader]} testID={isLoader(s) ? `${testID}-loader` : `${testID}-step`}>
           <Text style={styles.order}>{i + 1}.</Text>
-          <Text style={styles.code}>
-            {s.program}
-            {s.args ? ` ${s.args}` : ''}
-          </Text>
-          <Text style={styles.meta}>
-            line {s.line}
-            {s.conditional ? ' · only when its IF holds' : ''}
-            {isLoader(s) ? ' · ◆ network loader' : ''}
-          </Text>
+          <View style={styles.body}>
+            <Text style={styles.code}>
+              {s.program}
+              {s.args ? ` ${s.args}` : ''}
+            </Text>
+            <Text style={styles.meta}>
+              line {s.line}
+              {s.conditional ? ' · only when its IF holds' : ''}
+              {isLoader(s) ? ' · ◆ network loader' : ''}
+            </Text>
+          </View>
         </View>
       ))}
     </View>
@@ -43,9 +45,10 @@ const styles = StyleSheet.create({
   cols: { flexDirection: 'row', flexWrap: 'wrap', gap: space.lg },
   col: { flexGrow: 1, flexBasis: 260, gap: space.xs },
   title: { fontSize: 15 },
-  step: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'baseline', gap: space.sm, paddingVertical: 2, paddingHorizontal: space.xs, borderRadius: radius.sm },
+  step: { flexDirection: 'row', alignItems: 'flex-start', gap: space.sm, paddingVertical: 2, paddingHorizontal: space.xs, borderRadius: radius.sm },
   loader: { backgroundColor: colors.primarySoft, borderLeftWidth: 3, borderLeftColor: colors.primary },
-  order: { fontFamily: fonts.mono, fontSize: 13, color: colors.textMuted, width: 22 },
-  code: { fontFamily: fonts.mono, fontSize: 13, color: colors.text, flexShrink: 1 },
+  order: { fontFamily: fonts.mono, fontSize: 13, lineHeight: 19, color: colors.textMuted, width: 22 },
+  body: { flex: 1, minWidth: 0 },
+  code: { fontFamily: fonts.mono, fontSize: 13, lineHeight: 19, color: colors.text },
   meta: { fontFamily: fonts.regular, fontSize: 12, color: colors.textMuted },
 });

@@ -23,17 +23,12 @@ export function WizardFrame({ fullWidth, step, reached, onPick, showSteps = true
       </View>
       {status}
       {children}
+      {/* On a phone the live checks sit under the form, above the buttons that leave the step. */}
+      {wide ? null : side}
       <View style={styles.footer}>{footer}</View>
     </View>
   );
-  if (!wide) {
-    return (
-      <View style={styles.phone}>
-        {body}
-        {side}
-      </View>
-    );
-  }
+  if (!wide) return <View style={styles.phone}>{body}</View>;
   return (
     <View style={styles.wide}>
       {showSteps ? (
