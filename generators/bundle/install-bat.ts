@@ -179,7 +179,7 @@ function stops(placed: PlacedPc, facts: PcFacts): string[] {
     ':FULL',
     ...echo(
       `All ${BACKUP_SLOTS} backup folders in ${facts.drive}\\${BACKUP_ROOT} are used. Nothing was changed. ` +
-        'Keep them and ask the technician.',
+        `Copy ${facts.drive}\\${BACKUP_ROOT} to a floppy for safe keeping and empty it before installing again.`,
     ),
     ':END',
   ];
