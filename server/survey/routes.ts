@@ -24,8 +24,15 @@ export function surveyRouter(ctx: AppContext): Router {
   const edit = ctx.requireRole(...EDITORS);
   const base = '/sites/:siteId/survey';
 
-  const siteId = (req: Request) => params(req, siteParamsSchema).siteId;
-  const item = (req: Request) => params(req, itemParamsSchema);
+  // Writes take no query (a DELETE names its version there); anything else in the query is refused.
+  const siteId = (req: Request) => {
+    if (req.method !== 'GET' && req.method !== 'DELETE') query(req, emptyQuerySchema);
+    return params(req, siteParamsSchema).siteId;
+  };
+  const item = (req: Request) => {
+    if (req.method !== 'DELETE') query(req, emptyQuerySchema);
+    return params(req, itemParamsSchema);
+  };
 
   r.get('/survey/sites', read, (req, res) => {
     res.json({ items: survey.sites(query(req, sitesQuerySchema).q) });

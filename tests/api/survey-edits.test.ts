@@ -52,6 +52,9 @@ describe('bad bodies, paths and queries', () => {
     ['settings without version', async () => tech.put(`${p}/settings`).send({ networkPair: '2' }), 'version'],
     ['delete without version', async () => tech.delete(`${p}/runs/1`), 'version'],
     ['unknown query key', async () => tech.get(`${p}?debug=1`), '_'],
+    ['query on a write', async () => tech.post(`${p}/jacks?label=J-20`).send({ label: 'J-20' }), '_'],
+    ['query on a reading', async () => tech.post(`${p}/jacks/${await jackId()}/readings?confirmed=true`).send({ pair: '2', vdc: '480' }), '_'],
+    ['delete with more than its version', async () => tech.delete(`${p}/runs/1?version=1&force=1`), '_'],
     ['report with a bad download flag', async () => tech.get(`${p}/report.txt?download=yes`), 'download'],
     ['site id that is not a number', async () => tech.get('/api/sites/abc/survey'), 'siteId'],
   ];
