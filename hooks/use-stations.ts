@@ -137,3 +137,11 @@ export function useRecordFileMutation(id: number) {
     onSuccess: invalidate,
   });
 }
+
+export function useLinkUserMutation(id: number) {
+  const invalidate = useInvalidate();
+  return useMutation({
+    mutationFn: (v: { version: number; email: string | null }) => api<{ id: number; version: number; linkedUser: boolean }>(`/api/stations/${id}/user`, { method: 'PUT', body: v }),
+    onSuccess: invalidate,
+  });
+}

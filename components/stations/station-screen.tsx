@@ -10,13 +10,14 @@ import { KIND_LABELS } from '@/db/requests/sites';
 import { stationNameSchema, stationNumberSchema } from '@/db/requests/stations';
 import { ApiError } from '@/hooks/api-client';
 import { useSessionQuery } from '@/hooks/use-session';
-import { useArchiveStationMutation, useFilesQuery, useStationQuery, useUpdateStationMutation, type StationDetail } from '@/hooks/use-stations';
+import { useArchiveStationMutation, useFilesQuery, useLinkUserMutation, useStationQuery, useUpdateStationMutation, type StationDetail } from '@/hooks/use-stations';
 import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { Screen } from '@/components/ui/screen';
 import { TextField } from '@/components/ui/text-field';
 import { Body, Heading, Small } from '@/components/ui/text';
+import { STEP_TITLES } from '@/components/wizard/steps';
 
 const schema = z.object({
   name: stationNameSchema,
@@ -45,13 +46,14 @@ export function StationScreen() {
           {d.station.kind === 'pc' ? (
             <Card>
               <Heading>Machine profile</Heading>
-              <Body>{d.profile ? `Wizard at step “${d.profile.wizardStep}”.` : 'No profile yet.'}</Body>
+              <Body>{d.profile ? `The wizard has reached step “${STEP_TITLES[d.profile.wizardStep]}”.` : 'No profile yet.'}</Body>
               <Link href={`/stations/${d.station.id}/wizard` as never} style={styles.link} testID="open-wizard">
                 Open the profile wizard →
               </Link>
             </Card>
           ) : null}
           <StationForm key={d.station.version} detail={d} canEdit={canEdit} />
+          {d.station.kind === 'pc' && canEdit ? <OfficeUser key={`u${d.station.version}`} detail={d} /> : null}
           {d.station.kind === 'pc' ? <Revisions stationId={d.station.id} /> : null}
         </>
       ) : null}
@@ -83,6 +85,26 @@ function StationForm({ detail, canEdit }: { detail: StationDetail; canEdit: bool
           <Button variant="secondary" label={st.archivedAt ? 'Restore' : 'Archive'} testID="station-archive" busy={archive.isPending} onPress={() => archive.mutate({ version: st.version, archived: !st.archivedAt })} />
         </View>
       ) : null}
+    </Card>
+  );
+}
+
+/** The office user whose own PC this is: they see this station and its files, nothing else. */
+function OfficeUser({ detail }: { detail: StationDetail }) {
+  const st = detail.station;
+  const link = useLinkUserMutation(st.id);
+  const { control, handleSubmit } = useForm<{ email: string }>({ defaultValues: { email: '' }, resolver: zodResolver(z.object({ email: z.string().trim().pipe(z.email('Enter an e-mail address.')) })), mode: 'onTouched' });
+  const error = link.error instanceof ApiError ? link.error : null;
+  return (
+    <Card testID="office-user">
+      <Heading>Office user</Heading>
+      <Body testID="office-user-state">{st.linkedUser ? '● An office user is linked to this PC and can read its station and files.' : '○ No office user is linked to this PC.'}</Body>
+      {error ? <Banner tone="error">{error.fields.email ?? error.message}</Banner> : null}
+      <Controller control={control} name="email" render={({ field, fieldState }) => <TextField label="Office user’s e-mail" testID="office-user-email" autoCapitalize="none" inputMode="email" value={field.value} onChangeText={field.onChange} onBlur={field.onBlur} error={fieldState.error?.message} />} />
+      <View style={styles.actions}>
+        <Button compact label="Link" testID="office-user-link" busy={link.isPending} onPress={handleSubmit((v) => link.mutateAsync({ version: st.version, email: v.email }).catch(() => undefined))} />
+        {st.linkedUser ? <Button compact variant="secondary" label="Unlink" testID="office-user-unlink" onPress={() => link.mutate({ version: st.version, email: null })} /> : null}
+      </View>
     </Card>
   );
 }

@@ -1,6 +1,7 @@
 // /stations/:id/wizard: loads the station, its site's next numbers and the kits, then runs the wizard.
-import { useLocalSearchParams } from 'expo-router';
-import { ActivityIndicator } from 'react-native';
+import { Link, useLocalSearchParams } from 'expo-router';
+import { ActivityIndicator, StyleSheet } from 'react-native';
+import { colors, fonts } from '@/constants/theme';
 import { WIZARD_STEPS, type WizardStep } from '@/db/requests/stations';
 import { useKitsQuery } from '@/hooks/use-kits';
 import { useSessionQuery } from '@/hooks/use-session';
@@ -20,7 +21,16 @@ export function WizardScreen() {
   const me = useSessionQuery().data;
   const d = detail.data;
   return (
-    <Screen title={d ? `${d.station.name} · machine profile` : 'Machine profile'} subtitle={d ? `Station ${d.station.number} at ${d.site.name}` : undefined} width={1240} testID="wizard-screen">
+    <Screen title={d ? `${d.station.name} · machine profile` : 'Machine profile'} subtitle={d ? `Station ${d.station.number} at ${d.site.name}` : undefined} width={1240}
+      testID="wizard-screen"
+      actions={
+        d ? (
+          <Link href={`/stations/${d.station.id}` as never} style={styles.link} testID="station-details-link">
+            Station details and files →
+          </Link>
+        ) : null
+      }
+    >
       {detail.isError ? <Banner tone="error">{(detail.error as Error).message}</Banner> : null}
       {d && d.station.kind !== 'pc' ? <Banner tone="note">Only PCs have a machine profile; this station is a {d.station.kind}.</Banner> : null}
       {d && d.station.kind === 'pc' && kits.data ? (
@@ -31,3 +41,5 @@ export function WizardScreen() {
     </Screen>
   );
 }
+
+const styles = StyleSheet.create({ link: { fontFamily: fonts.semibold, fontSize: 14, color: colors.primary } });

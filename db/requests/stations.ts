@@ -99,3 +99,10 @@ export const planPreviewSchema = z.object({
   data: profileDraftSchema.optional(),
   kitId: z.number().int().positive().nullable().optional(),
 });
+
+/** Links an office user (role `user`, named by e-mail) to their own station, or unlinks with null. */
+export const linkUserSchema = z.object({
+  version: z.number().int().min(1),
+  email: z.string().trim().toLowerCase().max(254).pipe(z.email('Enter the office user’s e-mail address.')).nullable(),
+});
+export type LinkUserInput = z.input<typeof linkUserSchema>;

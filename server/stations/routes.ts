@@ -6,6 +6,7 @@ import { kit } from '@/db/schema';
 import { versionSchema } from '@/db/requests/common';
 import {
   fileKindSchema,
+  linkUserSchema,
   pasteSchema,
   planPreviewSchema,
   profileWriteSchema,
@@ -59,6 +60,11 @@ export function stationsRouter(ctx: AppContext): Router {
       res.json(stations.setArchived(currentUser(req), id, body(req, versionSchema).version, archived));
     });
   }
+
+  r.put('/stations/:id/user', editors, (req, res) => {
+    const id = stations.get(stationId(req)).id;
+    res.json(stations.linkUser(currentUser(req), id, body(req, linkUserSchema)));
+  });
 
   r.get('/stations/:id/profile', anyone, (req, res) => {
     res.json(stations.detail(readable(req).id).profile);

@@ -1,6 +1,8 @@
 // Stations and their profiles: directory, read, create, update and archive (optimistic locking), profile
 // drafts saved by the wizard on every step.
 import { stationCreateSchema, type ProfileWriteInput, type StationCreateInput, type StationUpdateInput } from '@/db/requests/stations';
+import { eq } from 'drizzle-orm';
+import { station, user } from '@/db/schema';
 import type { AppContext } from '../context';
 import { badRequest, conflict, HttpError, notFound } from '../http/errors';
 import type { SessionUser } from '../http/require-role';
@@ -132,7 +134,26 @@ export function createStationService(ctx: AppContext) {
     return { data: row.data, kitId: row.kitId, wizardStep: row.wizardStep, version: row.version, updatedAt: row.updatedAt };
   }
 
-  return { get, create, update, setArchived, list, detail, writeProfile, repo };
+  /** An office user sees only the station linked to them; each has at most one. */
+  function linkUser(actor: SessionUser, id: number, input: { version: number; email: string | null }) {
+    const st = get(id);
+    let userId: string | null = null;
+    if (input.email) {
+      const person = ctx.db.select().from(user).where(eq(user.email, input.email)).get();
+      if (!person || person.role !== 'user') {
+        throw badRequest('No office user has that e-mail address.', { email: 'No account with the role “office user” has that e-mail address.' });
+      }
+      const other = ctx.db.select().from(station).where(eq(station.userId, person.id)).get();
+      if (other && other.id !== id) throw new HttpError(409, 'taken', `${person.name} is already linked to station ${other.name}.`, { email: `Already linked to ${other.name}.` });
+      userId = person.id;
+    }
+    const row = repo.update(id, input.version, { userId });
+    if (!row) throw stale('station', get(id).version);
+    ctx.audit.record(actor, { action: userId ? 'station.link-user' : 'station.unlink-user', entity: 'station', entityId: id, siteId: st.siteId, details: { userId } });
+    return { id, version: row.version, linkedUser: userId !== null };
+  }
+
+  return { get, create, update, setArchived, list, detail, writeProfile, linkUser, repo };
 }
 
 export type StationService = ReturnType<typeof createStationService>;

@@ -50,6 +50,7 @@ const ROUTES: Route[] = [
   { method: 'patch', path: `/api/stations/${OWN}`, body: {}, expect: { ...WRITE, technician: 400, admin: 400 } },
   { method: 'post', path: `/api/stations/${OWN}/archive`, body: {}, expect: { ...WRITE, technician: 400, admin: 400 } },
   { method: 'post', path: `/api/stations/${OWN}/restore`, body: {}, expect: { ...WRITE, technician: 400, admin: 400 } },
+  { method: 'put', path: `/api/stations/${OWN}/user`, body: {}, expect: { ...WRITE, technician: 400, admin: 400 } },
   { method: 'get', path: `/api/stations/${OWN}/profile`, expect: { anonymous: 401, user: 200, lead: 200, technician: 200, admin: 200 } },
   { method: 'get', path: `/api/stations/${OTHER}/profile`, expect: { anonymous: 401, user: 404, lead: 200, technician: 200, admin: 200 } },
   { method: 'put', path: `/api/stations/${OWN}/profile`, body: {}, expect: { ...WRITE, technician: 400, admin: 400 } },

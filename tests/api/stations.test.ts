@@ -193,3 +193,27 @@ describe('the plan preview', () => {
     expect((await tech.post('/api/stations/9999/plan').send({})).status).toBe(404);
   });
 });
+
+describe('linking an office user to their station', () => {
+  it('moves the link, after which the user reads only the new station', async () => {
+    const user = await t.signIn(DEMO.user);
+    const draft1 = (await tech.get('/api/stations/2')).body.station;
+    const taken = await tech.put('/api/stations/2/user').send({ version: draft1.version, email: DEMO.user });
+    expect(taken.status).toBe(409);
+    expect(taken.body.error.message).toMatch(/already linked to station RECEPT/);
+    const technician = await tech.put('/api/stations/2/user').send({ version: draft1.version, email: DEMO.technician });
+    expect(technician.status).toBe(400);
+    expect(technician.body.error.fields.email).toMatch(/office user/);
+    const lead = await t.signIn(DEMO.lead);
+    expect((await lead.put('/api/stations/2/user').send({ version: draft1.version, email: DEMO.user })).status).toBe(403);
+
+    const recept = (await tech.get('/api/stations/1')).body.station;
+    expect((await tech.put('/api/stations/1/user').send({ version: recept.version, email: null })).body).toMatchObject({ linkedUser: false });
+    expect((await tech.put('/api/stations/2/user').send({ version: draft1.version, email: DEMO.user.toUpperCase() })).body).toMatchObject({ linkedUser: true });
+    expect((await user.get('/api/stations/mine')).body).toEqual({ stationId: 2 });
+    expect((await user.get('/api/stations/2')).status).toBe(200);
+    expect((await user.get('/api/stations/1')).status).toBe(404);
+    // The stale version the link read is refused like any other update.
+    expect((await tech.put('/api/stations/2/user').send({ version: draft1.version, email: null })).status).toBe(409);
+  });
+});
