@@ -1,7 +1,7 @@
 import { useLocalSearchParams, useRouter } from 'expo-router';
 import { useMemo, useRef, useState } from 'react';
 import { Platform, StyleSheet, View } from 'react-native';
-import { space } from '@/constants/theme';
+import { maxFormWidth, space } from '@/constants/theme';
 import { useBreakpoints } from '@/hooks/use-breakpoints';
 import { useSessionQuery } from '@/hooks/use-session';
 import { canEditSurvey, reportUrl, surveyWrites, useSurveyQuery, useSurveyWrite } from '@/hooks/use-survey';
@@ -73,7 +73,7 @@ export function SurveyScreen() {
         <View style={styles.stack}>
           <JacksView view={view} wide={wide} />
           {canEdit ? (
-            <Card>
+            <Card style={styles.form}>
               <Heading>Add a jack</Heading>
               <JackForm submitLabel="Add jack" testID="jack-new" onSubmit={(v) => writes.createJack(v)} />
             </Card>
@@ -85,4 +85,4 @@ export function SurveyScreen() {
   );
 }
 
-const styles = StyleSheet.create({ stack: { gap: space.md } });
+const styles = StyleSheet.create({ stack: { gap: space.md }, form: { maxWidth: maxFormWidth, width: '100%' } });
