@@ -2,17 +2,11 @@
 import type { ReactNode } from 'react';
 import { ScrollView, StyleSheet, Text, View } from 'react-native';
 import { colors, fonts, radius, space } from '@/constants/theme';
+import { splitDosLines } from './dos-lines';
+
+export { splitDosLines };
 
 export type LineMark = { mark: string; word: string; tone: 'final' | 'pick' | 'loader' };
-
-/** Splits decoded text into lines as the engine counts them (CR LF, LF or CR each end one line). */
-export function splitDosLines(text: string): string[] {
-  const cut = text.indexOf('\x1a');
-  const body = cut >= 0 ? text.slice(0, cut) : text;
-  const lines = body.split(/\r\n|\n|\r/);
-  if (lines.length > 1 && lines[lines.length - 1] === '') lines.pop();
-  return lines;
-}
 
 type Props = { text: string; marks?: Record<number, LineMark>; right?: (line: number) => ReactNode; testID?: string };
 

@@ -2,6 +2,10 @@
 // versioned updates, profile drafts and the plan preview that saves nothing.
 import { count } from 'drizzle-orm';
 import { planRevision, profile } from '@/db/schema';
+import iconv from 'iconv-lite';
+import { parseUnifiedDiff } from '@/components/stations/unified-diff';
+import { applyWithGnuPatch } from '../unit/engine/helpers/gnu-patch';
+import { splitDosLines } from '@/components/stations/dos-lines';
 import { DEMO, makeTestApp, type TestApp } from '../support/test-app';
 import type request from 'supertest';
 
@@ -170,6 +174,40 @@ describe('the plan preview', () => {
     expect(res.body.inputs.autoexec.content).toBeUndefined();
     expect(t.ctx.db.select({ n: count() }).from(planRevision).get()!.n).toBe(plansBefore);
     expect(t.ctx.db.select().from(profile).all().map((p) => p.version)).toEqual(profileBefore);
+  });
+
+  it('gives a diff whose line numbers, as the screen reads them, point at the same text in both files', async () => {
+    for (const id of [1, 2, 3, 4, 5, 6, 7, 8, 9, 10]) {
+      const plan = (await tech.post(`/api/stations/${id}/plan`).send({})).body.plan;
+      const before = splitDosLines(plan.files.autoexec.beforeText ?? '');
+      const after = splitDosLines(plan.files.autoexec.afterText);
+      const lines = parseUnifiedDiff(plan.files.autoexec.diff);
+      expect(lines.some((l) => l.type === 'add')).toBe(true);
+      for (const l of lines) {
+        if (l.type === 'add' || l.type === 'same') expect(after[l.newNo! - 1]).toBe(l.text);
+        if (l.type === 'del' || l.type === 'same') expect(before[l.oldNo! - 1]).toBe(l.text);
+      }
+    }
+  });
+
+  it('returns a diff GNU patch applies to the stored files, giving the patched files byte for byte', async () => {
+    // INTERN (8) has no AUTOEXEC.BAT: its plan writes a new file rather than patching one.
+    const ids = [1, 2, 3, 4, 5, 6, 7, 9, 10];
+    const cases = [];
+    const expected: Array<Record<string, Buffer>> = [];
+    for (const id of ids) {
+      const plan = (await tech.post(`/api/stations/${id}/plan`).send({})).body.plan;
+      const files = (await tech.get(`/api/stations/${id}`)).body.files;
+      const enc = (t: string) => iconv.encode(t, 'cp437');
+      // Code page 437 decodes one byte to one character, so encoding the shown text gives the stored bytes back.
+      const raw = async (f: { id: number; absent: boolean } | null) => (f && !f.absent ? enc((await tech.get(`/api/stations/${id}/files/${f.id}`)).body.text) : null);
+      cases.push({ files: { 'AUTOEXEC.BAT': await raw(files.autoexec), 'CONFIG.SYS': await raw(files.config) }, diff: enc(plan.diff) });
+      expected.push({ 'AUTOEXEC.BAT': enc(plan.files.autoexec.afterText), ...(plan.files.config ? { 'CONFIG.SYS': enc(plan.files.config.afterText) } : {}) });
+    }
+    applyWithGnuPatch(cases).forEach((out, i) => {
+      expect(out.ok).toBe(true);
+      for (const [name, bytes] of Object.entries(expected[i])) expect(out.files[name]?.equals(bytes)).toBe(true);
+    });
   });
 
   it('plans an unsaved draft when one is sent, and shows the kit’s minimum-DOS check', async () => {
