@@ -35,6 +35,9 @@ export function PlanPreviewPanel({ preview, loaderPath }: { preview: PlanPreview
           {`${checkCounts(plan.checks)}. Fix the errors below before the plan can be sent for review.`}
         </Banner>
       )}
+      <Banner tone="caution" title="Before anyone changes this PC" testID="plan-caution">
+        Keep a bootable diskette and copies of the original AUTOEXEC.BAT and CONFIG.SYS at hand (common practice): a wrong startup file can stop the PC from starting the way its user expects. The rollout bundle carries an undo file as well.
+      </Banner>
       <Card>
         <Heading>Checks</Heading>
         <ChecksList checks={plan.checks} testID="plan-checks" />
