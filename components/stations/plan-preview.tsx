@@ -8,9 +8,9 @@ import { Banner } from '@/components/ui/banner';
 import { Card } from '@/components/ui/card';
 import { Choice } from '@/components/ui/choice';
 import { Heading, Small } from '@/components/ui/text';
+import { PlanDiffs } from '@/components/plans/plan-diffs';
 import { BootPreview } from './boot-preview';
 import { checkCounts, ChecksList } from './checks-list';
-import { DiffView } from './diff-view';
 import { FileLines } from './file-lines';
 
 type FileTab = 'autoexec' | 'config';
@@ -48,9 +48,9 @@ export function PlanPreviewPanel({ preview, loaderPath }: { preview: PlanPreview
         <BootPreview before={plan.boot.before} after={plan.boot.after} loaderPath={loaderPath} testID="boot" />
       </Card>
       <Card>
-        <Heading>Changes (unified diff)</Heading>
-        <Small>Lines marked + are added, lines marked - are removed; the numbers are the old and new line numbers.</Small>
-        <DiffView diff={plan.diff} testID="plan-diff" />
+        <Heading>Changes</Heading>
+        <Small>Lines marked + are added, lines marked - are removed; the numbers are the old and new line numbers. Each changed block says why.</Small>
+        <PlanDiffs result={plan} />
       </Card>
       <Card>
         <Heading>Patched files</Heading>

@@ -1,7 +1,7 @@
 // People: list, change role, deactivate, invite by e-mail, accept an invitation (set the password once).
 import { and, asc, count, eq, gt, isNull } from 'drizzle-orm';
 import { createHash, randomBytes } from 'node:crypto';
-import { invitation, user } from '@/db/schema';
+import { invitation, station, user } from '@/db/schema';
 import type { InviteInput } from '@/db/requests/people';
 import type { AppContext } from '../context';
 import { badRequest, conflict, HttpError, notFound } from '../http/errors';
@@ -68,6 +68,9 @@ export function createPeopleService(ctx: AppContext) {
 
   async function invite(actor: SessionUser, input: InviteInput) {
     const email = input.email.toLowerCase();
+    if (input.stationId && !db.select({ id: station.id }).from(station).where(eq(station.id, input.stationId)).get()) {
+      throw badRequest('That station does not exist.', { stationId: 'Pick an existing station.' });
+    }
     if (db.select({ id: user.id }).from(user).where(eq(user.email, email)).get()) {
       throw conflict('Someone with that e-mail address already has an account.', 'email_taken');
     }
@@ -126,6 +129,10 @@ export function createPeopleService(ctx: AppContext) {
       .run();
     if (claimed.changes !== 1) throw new HttpError(410, 'invitation_invalid', 'This invitation link was already used.');
     await authCtx.internalAdapter.linkAccount({ providerId: 'credential', accountId: row.userId!, userId: row.userId!, password: hash });
+    // An office user invited for a station becomes that station's user.
+    if (row.role === 'user' && row.stationId) {
+      db.update(station).set({ userId: row.userId, updatedAt: new Date() }).where(eq(station.id, row.stationId)).run();
+    }
     audit.record({ id: row.userId!, email: row.email }, { action: 'user.accept-invite', entity: 'user', entityId: row.userId });
     return { email: row.email };
   }

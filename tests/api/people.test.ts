@@ -2,7 +2,7 @@
 // deactivation, and the audit trail of each.
 import { eq } from 'drizzle-orm';
 import request from 'supertest';
-import { invitation, user } from '@/db/schema';
+import { invitation, station, user } from '@/db/schema';
 import { DEMO, makeTestApp, ORIGIN, type TestApp } from '../support/test-app';
 
 let t: TestApp;
@@ -45,6 +45,17 @@ describe('invitations', () => {
 
     const agent = await t.signIn('sam@bootwright.test', 'quiet-river-stone');
     expect((await agent.get('/api/me')).body.user.role).toBe('lead');
+  });
+
+  it('links an office user invited for a station to that station once they accept', async () => {
+    const admin = await t.signIn(DEMO.admin);
+    const res = await admin.post('/api/people/invite').send({ email: 'desk@bootwright.test', name: 'Desk User', role: 'user', stationId: 2 });
+    expect(res.status).toBe(201);
+    expect((await admin.post('/api/people/invite').send({ email: 'ghost@bootwright.test', name: 'Ghost', role: 'user', stationId: 9999 })).status).toBe(400);
+    const token = tokenFrom(t.ctx.mailer.fake!.list().find((m) => m.to.includes('desk@bootwright.test'))!.text);
+    await request(t.app).post('/api/invitations/accept').send({ token, password: 'quiet-river-stone', confirm: 'quiet-river-stone' });
+    const row = t.ctx.db.select().from(station).where(eq(station.id, 2)).get()!;
+    expect(row.userId).toBe(res.body.id);
   });
 
   it('refuses an expired link', async () => {

@@ -3,7 +3,7 @@
 import { count } from 'drizzle-orm';
 import { planRevision, profile } from '@/db/schema';
 import iconv from 'iconv-lite';
-import { parseUnifiedDiff } from '@/components/stations/unified-diff';
+import { displayText, parseUnifiedDiff } from '@/components/diff/parse-diff';
 import { applyWithGnuPatch } from '../unit/engine/helpers/gnu-patch';
 import { splitDosLines } from '@/components/stations/dos-lines';
 import { DEMO, makeTestApp, type TestApp } from '../support/test-app';
@@ -181,11 +181,11 @@ describe('the plan preview', () => {
       const plan = (await tech.post(`/api/stations/${id}/plan`).send({})).body.plan;
       const before = splitDosLines(plan.files.autoexec.beforeText ?? '');
       const after = splitDosLines(plan.files.autoexec.afterText);
-      const lines = parseUnifiedDiff(plan.files.autoexec.diff);
-      expect(lines.some((l) => l.type === 'add')).toBe(true);
-      for (const l of lines) {
-        if (l.type === 'add' || l.type === 'same') expect(after[l.newNo! - 1]).toBe(l.text);
-        if (l.type === 'del' || l.type === 'same') expect(before[l.oldNo! - 1]).toBe(l.text);
+      const rows = parseUnifiedDiff(plan.files.autoexec.diff).flatMap((h) => h.rows);
+      expect(rows.some((r) => r.kind === 'add')).toBe(true);
+      for (const r of rows) {
+        if (r.kind !== 'del') expect(displayText(after[r.newNo! - 1])).toBe(r.text);
+        if (r.kind !== 'add') expect(displayText(before[r.oldNo! - 1])).toBe(r.text);
       }
     }
   });

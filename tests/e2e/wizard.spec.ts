@@ -84,8 +84,9 @@ async function runWizard(page: Page, name: string, wide: boolean) {
   const final = boot.findIndex((t) => t.includes('C:\\PLANS\\PLANVIEW.EXE'));
   expect(loader).toBeGreaterThanOrEqual(0);
   expect(loader).toBeLessThan(final);
-  await expect(page.getByTestId('diff-add').filter({ hasText: `TLRES.COM /S:${number} /Q` })).toHaveCount(1);
-  await expect(page.getByTestId('diff-add').first()).toContainText('+');
+  const loaderRow = page.getByTestId(/^diff-autoexec-line-\d+$/).filter({ hasText: `TLRES.COM /S:${number} /Q` });
+  await expect(loaderRow).toHaveCount(1);
+  await expect(loaderRow).toContainText('+');
 
   await page.getByTestId('wizard-done').click();
   await expect(page.getByTestId('site-screen')).toBeVisible();
