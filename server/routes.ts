@@ -7,5 +7,6 @@ import { peopleRouter } from './people/routes';
 import { surveyRouter } from './survey/routes';
 import { sitesRouter, kitsRouter, stationsRouter, siteDirectoryRouter } from './sites/all-routes';
 import { planRouters } from './plans/routers';
+import { bundlesRouter } from './bundles/routes';
 
-export const featureRouters: Array<(ctx: AppContext) => Router> = [peopleRouter, auditRouter, devMailRouter, sitesRouter, siteDirectoryRouter, kitsRouter, stationsRouter, ...planRouters, surveyRouter];
+export const featureRouters: Array<(ctx: AppContext) => Router> = [peopleRouter, auditRouter, devMailRouter, sitesRouter, siteDirectoryRouter, kitsRouter, stationsRouter, ...planRouters, surveyRouter, bundlesRouter];
