@@ -11,6 +11,7 @@ export const NAV_ITEMS: NavItem[] = [
   { href: '/my-station', label: 'My PC', glyph: '▣', roles: ['user'], testID: 'nav-my-station' },
   { href: '/sites', label: 'Sites', glyph: '▦', roles: ['admin', 'lead', 'technician'], testID: 'nav-sites' },
   { href: '/plans', label: 'Plans', glyph: '▤', roles: ['technician', 'admin'], testID: 'nav-plans' },
+  { href: '/bundles', label: 'Bundles', glyph: '⇩', roles: ['admin'], testID: 'nav-bundles' },
   { href: '/survey', label: 'Survey', glyph: '☏', roles: ['admin', 'lead', 'technician'], testID: 'nav-survey' },
   { href: '/kits', label: 'Kits', glyph: '◆', roles: ['admin', 'technician'], testID: 'nav-kits' },
   { href: '/people', label: 'People', glyph: '☺', roles: ['admin'], testID: 'nav-people' },

@@ -6,6 +6,7 @@ import { placePcs, type BundlePc } from '@/generators/bundle';
 import type { AppContext } from '../context';
 import { badRequest, notFound } from '../http/errors';
 import { currentApprovedPlans, freshnessOf } from '../plans/current';
+import { surveyReportForSite } from '../survey/report';
 import { createBundleRepository, type PlanMetaRow, type SiteRow, type StationRow } from './repository';
 
 type StationRef = { stationId: number; name: string; number: number; kind: StationRow['kind']; location: string };
@@ -28,6 +29,8 @@ export type BundlePreview = {
   leftOut: LeftOut[];
   /** Stations listed in STATIONS.TXT (every station of the site that is not archived). */
   directoryCount: number;
+  /** Whether SURVEY.TXT will be the wiring survey report (else a placeholder says none was recorded). */
+  survey: boolean;
 };
 
 const ref = (s: StationRow): StationRef => ({ stationId: s.id, name: s.name, number: s.number, kind: s.kind, location: s.location });
@@ -70,7 +73,14 @@ export function previewBundle(ctx: AppContext, siteId: number, selection: number
       leftOut.push({ ...ref(st), ...whyLeftOut(ctx, s.id, st, plan, approvers), planId: plan?.id ?? null, revision: plan?.revision ?? null });
     }
   }
-  return { site: { id: s.id, name: s.name }, selection, included: withFolders(included), leftOut, directoryCount: all.filter((x) => !x.archivedAt).length };
+  return {
+    site: { id: s.id, name: s.name },
+    selection,
+    included: withFolders(included),
+    leftOut,
+    directoryCount: all.filter((x) => !x.archivedAt).length,
+    survey: surveyReportForSite(ctx, s.id) !== null,
+  };
 }
 
 /** The folder each PC gets, exactly as the builder will name it. */

@@ -32,11 +32,11 @@ afterAll(async () => {
 });
 
 /** Collects a binary body (supertest would otherwise try to parse the zip). */
-function binary(res: NodeJS.ReadableStream, done: (err: Error | null, body: Buffer) => void) {
+const binary: Parameters<request.Test['parse']>[0] = (res, done) => {
   const chunks: Buffer[] = [];
   res.on('data', (c: Buffer) => chunks.push(c));
   res.on('end', () => done(null, Buffer.concat(chunks)));
-}
+};
 const getZip = (id: number) => admin.get(`/api/bundles/${id}/zip`).buffer(true).parse(binary);
 
 async function sent(name: string): Promise<PlanBody> {

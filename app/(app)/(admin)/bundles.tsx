@@ -1,0 +1,3 @@
+import { BundlesScreen } from '@/components/bundles/bundles-screen';
+
+export default BundlesScreen;
