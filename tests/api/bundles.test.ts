@@ -9,6 +9,7 @@ import request from 'supertest';
 import { bundleRecord } from '@/db/bundles';
 import { planRevision } from '@/db/plans';
 import { auditEvent, site, station, startupFile, surveyJack } from '@/db/schema';
+import { bundleFileName } from '@/server/bundles/file-name';
 import { surveyReportForSite } from '@/server/survey/report';
 import { reportStamp } from '@/server/survey/view';
 import { tempDir, unzipNames, unzipTest, zipEntries } from '../support/bundle-zip';
@@ -300,5 +301,34 @@ describe('a plan that moves between start and stream', () => {
     expect(again.body.error.code).toBe('bundle_failed');
     const listed = (await admin.get(`/api/bundles?siteId=${siteId}`)).body.items.find((i: { id: number }) => i.id === id);
     expect(listed).toMatchObject({ state: 'failed', failure: expect.stringContaining('changed since the bundle was started') });
+  });
+});
+
+describe('the leads’ mail', () => {
+  it('goes to active leads only', async () => {
+    expect((await admin.post(`/api/people/${userIdOf(t, DEMO.lead2)}/deactivate`).send({})).status).toBe(200);
+    await approved('MODELS');
+    const created = await admin.post('/api/bundles').send({ siteId, stationIds: [stationIdOf(t, 'MODELS')] }).expect(201);
+    const before = bundleMails().length;
+    expect((await getZip(created.body.record.id)).status).toBe(200);
+    await until(() => bundleMails().length > before);
+    const newest = bundleMails()[0]; // the fake lists newest first
+    expect(newest.to).toEqual([DEMO.lead]);
+    expect(newest.text).toContain('1 PC: MODELS');
+  });
+});
+
+describe('the download’s file name', () => {
+  it('is 8.3-valid for any site name and record number', () => {
+    expect(bundleFileName('Halvorsen & Pike Architects', 7)).toBe('HALV0007.ZIP');
+    expect(bundleFileName('Ærø Tegnestue', 12)).toBe('RTEG0012.ZIP');
+    expect(bundleFileName('  & ', 3)).toBe('BNDL0003.ZIP');
+    expect(bundleFileName('CON', 1)).toBe('CON0001.ZIP');
+    expect(bundleFileName('Büro Weiß', 123456)).toBe('BU123456.ZIP');
+    for (const [name, id] of [['a.b/c\\d', 1], ['LPT1', 99], ['日本', 5], ['x'.repeat(300), 1_000_000]] as const) {
+      const file = bundleFileName(name, id);
+      const base = file.slice(0, -4);
+      expect([file, NAME_83.test(file) && !DEVICE.test(base)]).toEqual([file, true]);
+    }
   });
 });
