@@ -118,8 +118,13 @@ export function useBundleDownload(siteId: number | null, saveZip: SaveZip) {
         stopPolling();
         const cancelled = (err as Error).name === 'AbortError';
         // Let the server record the ending first, so the history shows it when it refreshes.
-        await settled(record.id).catch(() => null);
-        const message = cancelled ? (again ? 'Download cancelled.' : 'Download cancelled; no plan was released.') : (err as Error).message;
+        const final = await settled(record.id).catch(() => null);
+        let message = (err as Error).message;
+        if (cancelled && again) message = 'Download cancelled.';
+        else if (cancelled && final?.state === 'done') {
+          // The server had sent the last byte before the cancel reached it: the bundle counts as downloaded.
+          message = `Cancelled too late: the server had already sent the whole zip, so bundle #${record.id} is recorded and its plans are released. Use “Download again” in the history to save it.`;
+        } else if (cancelled) message = 'Download cancelled; no plan was released.';
         setState({ step: 'failed', message, recordId: record.id });
       } finally {
         abort.current = null;
