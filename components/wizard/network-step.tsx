@@ -6,17 +6,31 @@ import { space } from '@/constants/theme';
 import { PARITY_LABELS } from '@/db/requests/kits';
 import { BAUD_RATES } from '@/generators/engine/profile';
 import type { Kit } from '@/hooks/use-kits';
+import { Banner } from '@/components/ui/banner';
+import { Button } from '@/components/ui/button';
 import { Choice } from '@/components/ui/choice';
 import { TextField } from '@/components/ui/text-field';
 import { Mono, Small } from '@/components/ui/text';
 import { COM_PORTS, LPT_PORTS, mergeArgs, type WizardForm } from './wizard-schema';
 
-export function NetworkStep({ control, kit, readOnly }: { control: Control<WizardForm>; kit: Kit | null; readOnly?: boolean }) {
-  const [ports, networkPort, args] = useWatch({ control, name: ['ports', 'networkPort', 'stationArgs'] });
+type Props = { control: Control<WizardForm>; kit: Kit | null; readOnly?: boolean; onUseKit?: (kit: Kit) => void };
+
+export function NetworkStep({ control, kit, readOnly, onUseKit }: Props) {
+  const [ports, networkPort, args, baud, parity, dataBits, stopBits] = useWatch({ control, name: ['ports', 'networkPort', 'stationArgs', 'baud', 'parity', 'dataBits', 'stopBits'] });
+  // A kit picked (or changed) after the serial fields were filled leaves them as they were; say so and offer the kit's.
+  const differsFromKit = !!kit && (baud !== kit.baud || parity !== kit.parity || dataBits !== kit.dataBits || stopBits !== kit.stopBits);
   const present = (name: string) => ports.find((p) => p.name === name)?.present;
   const kitNote = (value: unknown, kitValue: unknown) => (kit && value === kitValue ? ' (kit)' : '');
   return (
     <View style={styles.form}>
+      {differsFromKit && !readOnly && onUseKit ? (
+        <Banner tone="note" title="Serial settings differ from the kit" testID="net-kit-differs">
+          <Small>{`${kit!.name} uses ${kit!.baud} baud, parity ${kit!.parity}, ${kit!.dataBits} data bits, ${kit!.stopBits} stop bit${kit!.stopBits === 1 ? '' : 's'}.`}</Small>
+          <View style={{ flexDirection: 'row' }}>
+            <Button compact variant="secondary" label="Use the kit's settings" testID="net-use-kit" onPress={() => onUseKit(kit!)} />
+          </View>
+        </Banner>
+      ) : null}
       <Controller
         control={control}
         name="networkPort"

@@ -145,7 +145,14 @@ export function ProfileWizard({ detail, kits, nextNumbers, readOnly, openAt }: P
       ) : null}
       {step === 'dos' ? <DosStep control={control} kit={kit} readOnly={readOnly} /> : null}
       {step === 'ports' ? <PortsStep control={control} readOnly={readOnly} /> : null}
-      {step === 'network' ? <NetworkStep control={control} kit={kit} readOnly={readOnly} /> : null}
+      {step === 'network' ? <NetworkStep
+          control={control}
+          kit={kit}
+          readOnly={readOnly}
+          onUseKit={(k) => {
+            for (const [name, value] of [['baud', k.baud], ['parity', k.parity], ['dataBits', k.dataBits], ['stopBits', k.stopBits]] as const) setValue(name, value as never, { shouldDirty: true });
+          }}
+        /> : null}
       {step === 'files' ? <FilesStep stationId={station.id} files={files} readOnly={readOnly} onRecorded={(k) => k === 'AUTOEXEC.BAT' && setValue('finalProgram', 'auto')} /> : null}
       {step === 'final' ? <FinalStep control={control} preview={finalPreview.data} loading={finalPreview.isFetching} readOnly={readOnly} /> : null}
       {step === 'preview' ? preview.data ? <PlanPreviewPanel preview={preview.data} loaderPath={kit?.programPath} /> : preview.isError ? <Banner tone="error">{(preview.error as Error).message}</Banner> : <Small>Computing the plan…</Small> : null}
