@@ -39,6 +39,8 @@ export default defineConfig({
       DATABASE_URL: `${dbDir}/e2e.db`,
       LOG_LEVEL: 'error',
       SIGNIN_RATE_MAX: '1000',
+      // Browser tests make their own plans; the demo's seeded plans would change what they count.
+      SEED_DEMO_PLANS: '0',
     },
   },
 });

@@ -20,6 +20,11 @@ const envSchema = z.object({
     .enum(['0', '1'])
     .default('1')
     .transform((v) => v === '1'),
+  /** With SEED_ON_EMPTY: also put the demo site's plans in review, approved and returned states. */
+  SEED_DEMO_PLANS: z
+    .enum(['0', '1'])
+    .default('1')
+    .transform((v) => v === '1'),
   /** Sign-in attempts allowed per client address per minute. */
   SIGNIN_RATE_MAX: z.coerce.number().int().min(1).default(10),
   NODE_ENV: z.string().default('development'),

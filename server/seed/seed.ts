@@ -5,6 +5,7 @@ import { kit, profile, site, startupFile, station, user } from '@/db/schema';
 import type { AppContext } from '../context';
 import { seedDemoSurvey } from '../survey/seed';
 import { DEMO_FILES } from './demo-files';
+import { seedDemoPlans } from './demo-plans';
 import { DEMO_ACCOUNTS, DEMO_KIT, DEMO_OTHER_STATIONS, DEMO_PASSWORD, DEMO_PCS, DEMO_RANGES, DEMO_SITE, demoProfile } from './demo-data';
 
 const sha256 = (b: Buffer) => createHash('sha256').update(b).digest('hex');
@@ -14,6 +15,7 @@ export async function seedIfEmpty(ctx: AppContext): Promise<boolean> {
   const users = ctx.db.select({ n: count() }).from(user).get()!.n;
   if (users > 0) return false;
   await seedDemo(ctx);
+  if (ctx.env.SEED_DEMO_PLANS) await seedDemoPlans(ctx);
   return true;
 }
 

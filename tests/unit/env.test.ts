@@ -3,7 +3,7 @@ import { readEnv } from '@/server/env';
 describe('environment', () => {
   it('has embedded defaults for a fresh machine', () => {
     const env = readEnv({});
-    expect(env).toMatchObject({ PORT: 3000, DATABASE_URL: 'data/bootwright.db', SEED_ON_EMPTY: true, WEB_DIR: 'dist' });
+    expect(env).toMatchObject({ PORT: 3000, DATABASE_URL: 'data/bootwright.db', SEED_ON_EMPTY: true, SEED_DEMO_PLANS: true, WEB_DIR: 'dist' });
     expect(env.SMTP_URL).toBeUndefined();
   });
 
