@@ -10,7 +10,7 @@ import { Coalesce } from './coalesce';
 import { JSZIP_METHOD } from './jszip-deflate';
 import { bundleEntries, placePcs, SITE_FILES } from './layout';
 import type { PlacedPc } from './layout';
-import { LazySource } from './lazy-source';
+import { DeflateCache, lazyEntry } from './lazy-entry';
 import { manifestBytes, sha256Hex } from './manifest';
 import type { ManifestRow } from './manifest';
 import { readmeLines, stationsLines, surveyPlaceholderLines } from './site-files';
@@ -109,10 +109,12 @@ export function buildBundle(site: BundleSite, opts: BundleBuildOptions = {}): No
   const rows = new Map<string, ManifestRow>();
   const cursor = new FolderCursor(site, placed, rows, opts.onProgress);
   const indexOfFolder = new Map(placed.map((p, i) => [p.folder, i]));
+  const engine = opts.deflate ?? 'pako';
+  const cache = new DeflateCache(engine, BUNDLE_DEFLATE_LEVEL);
   const zip = new JSZip();
   const add = (name: string, produce: () => Uint8Array) => {
-    const source = new LazySource(produce) as unknown as NodeJS.ReadableStream;
-    zip.file(name, source, { binary: true, date, createFolders: false });
+    // JSZip's types do not list its CompressedObject, which lazyEntry is (lazy-entry.ts).
+    zip.file(name, lazyEntry(produce, cache) as unknown as Uint8Array, { binary: true, date, createFolders: false });
   };
 
   for (const entry of entries) {
@@ -135,7 +137,7 @@ export function buildBundle(site: BundleSite, opts: BundleBuildOptions = {}): No
     type: 'nodebuffer',
     streamFiles: true,
     // DEFLATE (method 8) through our deflater (deflate.ts); JSZip's types list only its own method names.
-    compression: JSZIP_METHOD[opts.deflate ?? 'pako'] as 'DEFLATE',
+    compression: JSZIP_METHOD[engine] as 'DEFLATE',
     compressionOptions: { level: BUNDLE_DEFLATE_LEVEL },
     platform: 'DOS',
   });

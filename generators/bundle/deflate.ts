@@ -24,13 +24,35 @@ type PakoDeflate = {
   deflateInit2(strm: ZStream, level: number, method: number, windowBits: number, memLevel: number, strategy: number): number;
   deflate(strm: ZStream, flush: number): number;
   deflateReset(strm: ZStream): number;
+  deflateResetKeep(strm: ZStream): number;
 };
+
+/** The fields of pako's deflate state that its lm_init() sets (pako 1.0, as zlib's). */
+type LmState = {
+  w_size: number;
+  window_size: number;
+  head: Uint16Array;
+  max_lazy_match: number;
+  good_match: number;
+  nice_match: number;
+  max_chain_length: number;
+  strstart: number;
+  block_start: number;
+  lookahead: number;
+  insert: number;
+  match_length: number;
+  prev_length: number;
+  match_available: number;
+  ins_h: number;
+};
+type LmParams = Pick<LmState, 'max_lazy_match' | 'good_match' | 'nice_match' | 'max_chain_length'>;
 
 const Z_OK = 0;
 const Z_STREAM_END = 1;
 const Z_FINISH = 4;
 const Z_DEFLATED = 8;
 const CHUNK = 64 * 1024;
+const MIN_MATCH = 3;
 
 const jszipDir = dirname(require.resolve('jszip/package.json'));
 const pakoDeflate = require(require.resolve('pako/lib/zlib/deflate', { paths: [jszipDir] })) as PakoDeflate;
@@ -40,12 +62,39 @@ const ZStreamClass = require(require.resolve('pako/lib/zlib/zstream', { paths: [
 export class RawDeflater implements Deflater {
   private readonly strm: ZStream;
   private readonly out = new Uint8Array(CHUNK);
+  private readonly params: LmParams;
 
   constructor(readonly level: number) {
     this.strm = new ZStreamClass();
     // Same parameters as pako's Deflate with { raw: true, level }: window 2^15, memLevel 8, default strategy.
     const status = pakoDeflate.deflateInit2(this.strm, level, Z_DEFLATED, -15, 8, 0);
     if (status !== Z_OK) throw new Error(`pako deflateInit2 failed (${status})`);
+    const s = (this.strm as ZStream & { state: LmState }).state;
+    this.params = { max_lazy_match: s.max_lazy_match, good_match: s.good_match, nice_match: s.nice_match, max_chain_length: s.max_chain_length };
+  }
+
+  /**
+   * pako's deflateReset(), with the hash table cleared by fill(0): pako clears it (64 KB) in a JavaScript
+   * loop, which for thousands of small entries cost more than compressing them. Same fields, same values
+   * as lm_init() in pako 1.0's deflate.js (zlib's), so the state equals a fresh one.
+   */
+  private reset(): void {
+    const status = pakoDeflate.deflateResetKeep(this.strm);
+    if (status !== Z_OK) throw new Error(`pako deflateResetKeep failed (${status})`);
+    const s = (this.strm as ZStream & { state: LmState }).state;
+    s.window_size = 2 * s.w_size;
+    s.head.fill(0);
+    s.max_lazy_match = this.params.max_lazy_match;
+    s.good_match = this.params.good_match;
+    s.nice_match = this.params.nice_match;
+    s.max_chain_length = this.params.max_chain_length;
+    s.strstart = 0;
+    s.block_start = 0;
+    s.lookahead = 0;
+    s.insert = 0;
+    s.match_length = s.prev_length = MIN_MATCH - 1;
+    s.match_available = 0;
+    s.ins_h = 0;
   }
 
   /** Compresses one whole input; synchronous, so one deflater can serve many bundles in turn. */
@@ -65,7 +114,7 @@ export class RawDeflater implements Deflater {
       parts.push(this.out.slice(0, strm.next_out));
     } while (status !== Z_STREAM_END);
     strm.input = null;
-    pakoDeflate.deflateReset(strm);
+    this.reset();
     return parts.length === 1 ? parts[0] : concat(parts);
   }
 }

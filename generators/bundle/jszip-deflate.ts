@@ -19,7 +19,7 @@ type GenericWorkerClass = {
 type Compression = { magic: string; compressWorker(options: { level?: number }): Worker; uncompressWorker(): Worker };
 
 const jszipDir = dirname(require.resolve('jszip/package.json'));
-const compressions = require(`${jszipDir}/lib/compressions`) as Record<string, Compression>;
+export const compressions = require(`${jszipDir}/lib/compressions`) as Record<string, Compression>;
 const GenericWorker = require(`${jszipDir}/lib/stream/GenericWorker`) as GenericWorkerClass;
 
 /** The name to pass as JSZip's `compression` option for each engine. */
@@ -30,7 +30,7 @@ export const JSZIP_METHOD: Record<DeflateEngine, string> = {
 
 const deflaters = new Map<string, Deflater>();
 
-function deflaterFor(engine: DeflateEngine, level: number): Deflater {
+export function deflaterFor(engine: DeflateEngine, level: number): Deflater {
   const key = `${engine}:${level}`;
   let d = deflaters.get(key);
   if (!d) deflaters.set(key, (d = engine === 'pako' ? new RawDeflater(level) : new NodeZlibDeflater(level)));
