@@ -25,6 +25,7 @@ type WorkerBase = {
   isFinished: boolean;
   push(chunk: Chunk): void;
   end(): void;
+  resume(): boolean;
   error(e: unknown): void;
   withStreamInfo(key: string, value: unknown): WorkerBase;
 };
@@ -44,8 +45,9 @@ const crc32: (input: Uint8Array) => number =
     ? (input) => (zlib as unknown as { crc32(d: Uint8Array): number }).crc32(input)
     : (input) => jszipCrc32(input) >>> 0;
 
-/** Inputs up to this size are looked up in the per-bundle cache; the repeated files are all small. */
-const CACHE_MAX_INPUT = 4096;
+/** Inputs up to this size are looked up in the per-bundle cache: the repeated files are all small (SAMEFILE.COM
+ * is about 200 bytes) and the larger, unique files would only cost a key string each. */
+const CACHE_MAX_INPUT = 512;
 const CACHE_MAX_ENTRIES = 64;
 
 /** Compressed bytes by input, per bundle, most recently used last; bounded so memory stays flat. */
@@ -95,7 +97,7 @@ function entryWorker(produce: () => Uint8Array, cache: DeflateCache, compression
     worker.push({ data: Buffer.from(data.buffer, data.byteOffset, data.byteLength), meta: { percent: 100 } });
     worker.end();
   };
-  (worker as { resume(): boolean }).resume = function resume() {
+  worker.resume = function resume() {
     const resumed = GenericWorker.prototype.resume.call(worker);
     // Emitting inside resume() would re-enter JSZip's zip worker before it finished resuming; next turn
     // instead (setImmediate, so a server answering other requests gets its turn between entries).
