@@ -1,37 +1,27 @@
 // The technician's view of one plan revision: the diff with the engine's reasons and the lead's comments,
 // the checks with a reason for each warning, send for review, make a new revision.
-import { useLocalSearchParams, useRouter } from 'expo-router';
+import { useRouter } from 'expo-router';
 import { StyleSheet, View } from 'react-native';
 import { checkKey } from '@/db/requests/plans';
 import { space } from '@/constants/theme';
 import { ApiError } from '@/hooks/api-client';
-import { useCreatePlanMutation, usePlanQuery, useSaveReasonsMutation, useSubmitPlanMutation, type PlanView } from '@/hooks/use-plans';
+import { useCreatePlanMutation, useSaveReasonsMutation, useSubmitPlanMutation, type PlanView } from '@/hooks/use-plans';
 import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { Screen } from '@/components/ui/screen';
 import { Body, Heading } from '@/components/ui/text';
-import { FullScreenLoading } from '@/components/shell/loading';
 import { BootPreview } from './boot-preview';
 import { ChecksList } from './checks-list';
 import { CommentsList } from './comments-list';
 import { DecisionNote, FileDownloads, Hashes, PlanFacts, RevisionLinks, StaleBanner } from './plan-header';
+import { PlanRoute } from './plan-route';
 import { PlanDiffs } from './plan-diffs';
 import { ProfileSummary } from './profile-summary';
 import { SubmitForm } from './submit-form';
 
 export function PlanScreen() {
-  const { id } = useLocalSearchParams<{ id: string }>();
-  const query = usePlanQuery(Number(id));
-  if (query.isPending) return <FullScreenLoading />;
-  if (query.isError) {
-    return (
-      <Screen title="Plan">
-        <Banner tone="error">{(query.error as Error).message}</Banner>
-      </Screen>
-    );
-  }
-  return <PlanBody view={query.data} />;
+  return <PlanRoute title="Plan">{(view) => <PlanBody view={view} />}</PlanRoute>;
 }
 
 function PlanBody({ view }: { view: PlanView }) {

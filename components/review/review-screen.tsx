@@ -1,23 +1,22 @@
 // The lead's review of one plan revision: the diff with the engine's reason for each changed block, the
 // checks with the technician's reasons, the boot order before and after, the profile; comments on lines;
 // approve the exact plan hash shown or return it. A 409 shows the fresh view with a note.
-import { useLocalSearchParams } from 'expo-router';
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { checkKey } from '@/db/requests/plans';
 import { colors, space } from '@/constants/theme';
 import { ApiError } from '@/hooks/api-client';
-import { usePlanQuery, type PlanView } from '@/hooks/use-plans';
+import { type PlanView } from '@/hooks/use-plans';
 import { useApproveMutation, useCommentMutation, useReturnMutation } from '@/hooks/use-review';
 import { Banner } from '@/components/ui/banner';
 import { Card } from '@/components/ui/card';
 import { Screen } from '@/components/ui/screen';
 import { Body, Heading, Mono, Small } from '@/components/ui/text';
-import { FullScreenLoading } from '@/components/shell/loading';
 import { BootPreview } from '@/components/plans/boot-preview';
 import { ChecksList } from '@/components/plans/checks-list';
 import { CommentsList } from '@/components/plans/comments-list';
 import { DecisionNote, FileDownloads, Hashes, PlanFacts, RevisionLinks, StaleBanner } from '@/components/plans/plan-header';
+import { PlanRoute } from '@/components/plans/plan-route';
 import { PlanDiffs } from '@/components/plans/plan-diffs';
 import { ProfileSummary } from '@/components/plans/profile-summary';
 import { CommentForm } from './comment-form';
@@ -26,17 +25,7 @@ import { DecisionForm } from './decision-form';
 type FileName = 'AUTOEXEC.BAT' | 'CONFIG.SYS';
 
 export function ReviewScreen() {
-  const { id } = useLocalSearchParams<{ id: string }>();
-  const query = usePlanQuery(Number(id));
-  if (query.isPending) return <FullScreenLoading />;
-  if (query.isError) {
-    return (
-      <Screen title="Review">
-        <Banner tone="error">{(query.error as Error).message}</Banner>
-      </Screen>
-    );
-  }
-  return <ReviewBody view={query.data} />;
+  return <PlanRoute title="Review">{(view) => <ReviewBody view={view} />}</PlanRoute>;
 }
 
 function ReviewBody({ view }: { view: PlanView }) {
